@@ -1,0 +1,11 @@
+import { authenticate } from '@/lib/auth/accounts';
+import { route } from '@/lib/auth/handler';
+import { signInSchema } from '@/lib/validation/auth';
+
+// POST /api/auth/sign-in — sets the session cookie; 429 with Retry-After after 5 failures in 15 minutes.
+export const POST = route({ auth: 'optional', body: signInSchema }, async ({ body, session, address }) => {
+  const user = await authenticate(body, address);
+  session.userId = user.id;
+  await session.save();
+  return { user };
+});

@@ -1,0 +1,8 @@
+import * as foundation from './20261201-0001-foundation';
+
+/**
+ * Every migration in the order it runs. Listed by hand (not globbed) so the same list works
+ * under tsx, vitest and the Next.js server bundle. Append only: an applied migration is never
+ * edited; a change is a new file.
+ */
+export const migrations = [{ name: '20261201-0001-foundation', ...foundation }];

@@ -1,0 +1,4 @@
+import * as demoTeam from './20261201-0001-demo-team';
+
+/** Demo seeders in order; each runs once per database (recorded in schema_seeds). */
+export const seeders = [{ name: '20261201-0001-demo-team', ...demoTeam }];

@@ -1,0 +1,82 @@
+import { headers } from 'next/headers';
+import type { z } from 'zod';
+import { AppError } from '@/lib/api/errors';
+import { loadActor } from './actor';
+import { authorize, requireActor } from './authorize';
+import { currentSession } from './current';
+import type { Action, Actor, Resource } from './policy';
+
+/** What every form's server action returns: field errors inline, one message for the rest. */
+export interface FormState {
+  ok?: boolean;
+  message?: string;
+  errors?: Record<string, string[]>;
+  /** The submitted text fields, so a failed submit does not empty the form. */
+  values?: Record<string, string>;
+}
+
+export interface ActionContext {
+  session: Awaited<ReturnType<typeof currentSession>>;
+  actor: Actor | null;
+  address: string;
+  authorize(action: Action, resource: Resource, what?: string): void;
+  signedIn(): Actor;
+}
+
+/**
+ * The one wrapper of every server action: validates the form with zod (field errors come back
+ * for inline display), loads the session and actor, hands over the policy, and turns an AppError
+ * into a message. Anything else (including redirect()) propagates to Next.
+ *
+ * @example
+ * export const inviteAction = formAction(inviteSchema, async (data, { authorize }) => { ... });
+ */
+export function formAction<T>(
+  schema: z.ZodType<T>,
+  fn: (data: T, ctx: ActionContext) => Promise<FormState | void>,
+) {
+  return async (_previous: FormState, formData: FormData): Promise<FormState> => {
+    const values = textFields(formData);
+    const parsed = schema.safeParse(values);
+    if (!parsed.success) {
+      const errors: Record<string, string[]> = {};
+      for (const issue of parsed.error.issues) {
+        const key = issue.path.map(String).join('.') || 'form';
+        (errors[key] ??= []).push(issue.message);
+      }
+      return { errors, values: withoutSecrets(values), message: 'Please correct the highlighted fields.' };
+    }
+    const session = await currentSession();
+    const actor = await loadActor(session.userId);
+    const address = (await headers()).get('x-forwarded-for')?.split(',')[0]?.trim() || 'local';
+    try {
+      return (
+        (await fn(parsed.data, {
+          session,
+          actor,
+          address,
+          authorize: (action, resource, what) => authorize(actor, action, resource, what),
+          signedIn: () => requireActor(actor),
+        })) ?? { ok: true }
+      );
+    } catch (error) {
+      if (error instanceof AppError) {
+        return { message: error.message, values: withoutSecrets(values) };
+      }
+      throw error;
+    }
+  };
+}
+
+function textFields(formData: FormData): Record<string, string> {
+  const out: Record<string, string> = {};
+  for (const [key, value] of formData.entries()) {
+    if (typeof value === 'string' && !key.startsWith('$ACTION')) out[key] = value;
+  }
+  return out;
+}
+
+function withoutSecrets(values: Record<string, string>): Record<string, string> {
+  const { password: _password, ...rest } = values;
+  return rest;
+}

@@ -1,0 +1,87 @@
+import { Op } from 'sequelize';
+import { badRequest, conflict, notFound } from '@/lib/api/errors';
+import { recordEvent } from '@/lib/audit/record';
+import { db } from '@/lib/db';
+import { Invitation, Membership, User } from '@/models';
+import type { Role } from '@/models/roles';
+
+export interface MemberRow {
+  membershipId: number;
+  userId: number;
+  name: string;
+  email: string;
+  role: Role;
+  joinedAt: string;
+}
+
+export interface PendingInvitation {
+  id: number;
+  email: string;
+  role: Role;
+  expiresAt: string;
+}
+
+export async function listMembers(teamId: number): Promise<{ members: MemberRow[]; invitations: PendingInvitation[] }> {
+  const memberships = await Membership.findAll({
+    where: { teamId },
+    include: [{ model: User, as: 'user' }],
+    order: [['createdAt', 'ASC']],
+  });
+  const invitations = await Invitation.findAll({
+    where: { teamId, acceptedAt: null, expiresAt: { [Op.gt]: new Date() } },
+    order: [['createdAt', 'DESC']],
+  });
+  return {
+    members: memberships.map((m) => {
+      const user = (m as Membership & { user: User }).user;
+      return {
+        membershipId: m.id,
+        userId: user.id,
+        name: user.name,
+        email: user.email,
+        role: m.role,
+        joinedAt: m.createdAt.toISOString(),
+      };
+    }),
+    invitations: invitations.map((i) => ({ id: i.id, email: i.email, role: i.role, expiresAt: i.expiresAt.toISOString() })),
+  };
+}
+
+async function membershipOf(teamId: number, membershipId: number): Promise<Membership> {
+  const membership = await Membership.findOne({ where: { id: membershipId, teamId } });
+  if (!membership) throw notFound('That member');
+  return membership;
+}
+
+async function assertAnotherOwnerRemains(teamId: number, membership: Membership) {
+  if (membership.role !== 'owner') return;
+  const owners = await Membership.count({ where: { teamId, role: 'owner' } });
+  if (owners <= 1) throw conflict('A team needs at least one owner. Make someone else owner first.');
+}
+
+export async function changeRole(actorId: number, teamId: number, membershipId: number, role: Role): Promise<MemberRow> {
+  const membership = await membershipOf(teamId, membershipId);
+  if (membership.role !== role && role !== 'owner') await assertAnotherOwnerRemains(teamId, membership);
+  const from = membership.role;
+  await db().transaction(async (transaction) => {
+    await membership.update({ role }, { transaction });
+    await recordEvent({ teamId, actorId, action: 'member.role_changed', subjectType: 'membership', subjectId: membership.id, data: { from, to: role } }, transaction);
+  });
+  return (await listMembers(teamId)).members.find((m) => m.membershipId === membershipId)!;
+}
+
+export async function removeMember(actorId: number, teamId: number, membershipId: number): Promise<void> {
+  const membership = await membershipOf(teamId, membershipId);
+  await assertAnotherOwnerRemains(teamId, membership);
+  await db().transaction(async (transaction) => {
+    await membership.destroy({ transaction });
+    await recordEvent({ teamId, actorId, action: 'member.removed', subjectType: 'membership', subjectId: membership.id, data: { userId: membership.userId } }, transaction);
+  });
+}
+
+export async function assertNotMember(teamId: number, email: string): Promise<void> {
+  const user = await User.findOne({ where: { email } });
+  if (user && (await Membership.count({ where: { teamId, userId: user.id } }))) {
+    throw badRequest('That person is already in the team.', [{ path: 'email', message: 'Already a member.' }]);
+  }
+}

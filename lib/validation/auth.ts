@@ -1,0 +1,61 @@
+import { z } from 'zod';
+import { ROLES } from '@/models/roles';
+
+/** Schemas shared by the forms (inline errors) and the route handlers (400s). */
+
+export const email = z
+  .string({ error: 'Enter your e-mail address.' })
+  .trim()
+  .toLowerCase()
+  .pipe(z.email({ error: 'Enter a valid e-mail address.' }));
+
+export const newPassword = z
+  .string({ error: 'Choose a password.' })
+  .min(10, { error: 'Use at least 10 characters.' })
+  .max(200, { error: 'Use at most 200 characters.' });
+
+const name = z
+  .string({ error: 'Enter your name.' })
+  .trim()
+  .min(1, { error: 'Enter your name.' })
+  .max(120, { error: 'Keep the name under 120 characters.' });
+
+export const signUpSchema = z.object({
+  name,
+  email,
+  password: newPassword,
+  teamName: z
+    .string({ error: 'Name your team.' })
+    .trim()
+    .min(2, { error: 'Name your team (2 characters or more).' })
+    .max(120, { error: 'Keep the team name under 120 characters.' }),
+});
+
+export const signInSchema = z.object({
+  email,
+  password: z.string({ error: 'Enter your password.' }).min(1, { error: 'Enter your password.' }),
+});
+
+export const resetRequestSchema = z.object({ email });
+
+export const resetConfirmSchema = z.object({
+  token: z.string({ error: 'The reset link is incomplete.' }).min(10, { error: 'The reset link is incomplete.' }),
+  password: newPassword,
+});
+
+export const role = z.enum(ROLES, { error: `Role must be one of: ${ROLES.join(', ')}.` });
+
+export const inviteSchema = z.object({ email, role });
+
+export const roleChangeSchema = z.object({ role });
+
+/** Accepting as the signed-in user needs nothing; a new account needs a name and a password. */
+export const acceptInvitationSchema = z.union([
+  z.object({ name, password: newPassword }),
+  z.object({}).strict(),
+]);
+
+export const idParam = z.coerce.number({ error: 'Must be a number.' }).int().positive();
+export const teamParams = z.object({ teamId: idParam });
+export const memberParams = z.object({ teamId: idParam, membershipId: idParam });
+export const tokenParams = z.object({ token: z.string().min(10) });
