@@ -1,0 +1,13 @@
+import type { NextConfig } from 'next';
+
+const nextConfig: NextConfig = {
+  // Native and Node-only packages stay outside the bundle (Sequelize otherwise pulls in every
+  // dialect's driver, pg-hstore among them, and the build fails).
+  serverExternalPackages: ['sequelize', 'sqlite3', 'nodemailer', 'smtp-server', 'mailparser', 'umzug'],
+  // The dev server only hydrates for origins it knows; tests and people open it by address too.
+  allowedDevOrigins: ['127.0.0.1', 'localhost'],
+  poweredByHeader: false,
+  typedRoutes: false,
+};
+
+export default nextConfig;
