@@ -22,7 +22,8 @@ export function sessionOptions(): SessionOptions {
     cookieOptions: {
       httpOnly: true,
       sameSite: 'lax',
-      secure: process.env.NODE_ENV === 'production' && !process.env.INSECURE_COOKIES,
+      // COOKIE_SECURE=false only for a production build served over plain http on this machine (browser tests).
+      secure: process.env.COOKIE_SECURE ? process.env.COOKIE_SECURE === 'true' : process.env.NODE_ENV === 'production',
       path: '/',
     },
   };

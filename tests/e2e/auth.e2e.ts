@@ -1,0 +1,104 @@
+import { describe, expect, it } from 'vitest';
+import { linkFrom, useBrowser, waitForMail } from './browser';
+
+const browser = useBrowser();
+const DEMO_PASSWORD = 'loadbearing-demo';
+
+async function signIn(page: import('playwright-core').Page, email: string, password: string) {
+  await page.goto('/sign-in');
+  await page.fill('input[name=email]', email);
+  await page.fill('input[name=password]', password);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+}
+
+describe('signing up, in and out', () => {
+  it('a new coach signs up and lands on the dashboard with their team', async () => {
+    const context = await browser.newContext();
+    const page = await context.newPage();
+    await page.goto('/sign-up');
+    await page.fill('input[name=name]', 'Rhea Ledge');
+    await page.fill('input[name=email]', 'rhea@example.test');
+    await page.fill('input[name=password]', 'rhea-password-1');
+    await page.fill('input[name=teamName]', 'Ledge Strength Club');
+    await page.getByRole('button', { name: 'Create account' }).click();
+    await page.waitForURL('**/dashboard');
+    await expect.poll(() => page.getByRole('heading', { name: 'Dashboard' }).isVisible()).toBe(true);
+    expect(await page.getByText('Ledge Strength Club').first().isVisible()).toBe(true);
+    await context.close();
+  });
+
+  it('shows inline errors for a bad sign-up and keeps what was typed', async () => {
+    const context = await browser.newContext();
+    const page = await context.newPage();
+    await page.goto('/sign-up');
+    await page.fill('input[name=name]', 'Short Pass');
+    await page.fill('input[name=email]', 'short@example.test');
+    await page.fill('input[name=password]', 'short');
+    await page.fill('input[name=teamName]', 'Tiny Team');
+    await page.getByRole('button', { name: 'Create account' }).click();
+    await expect.poll(() => page.getByText('Use at least 10 characters.').isVisible()).toBe(true);
+    expect(await page.inputValue('input[name=email]')).toBe('short@example.test');
+    expect(page.url()).toMatch(/\/sign-up/);
+    await context.close();
+  });
+
+  it('signs out, then signs back in; signed-out visitors of app pages go to sign-in', async () => {
+    const context = await browser.newContext();
+    const page = await context.newPage();
+    await signIn(page, 'rhea@example.test', 'rhea-password-1');
+    await page.waitForURL('**/dashboard');
+    await page.getByRole('button', { name: 'Sign out' }).click();
+    await page.waitForURL((url) => url.pathname === '/');
+    await page.goto('/dashboard');
+    await page.waitForURL('**/sign-in?next=%2Fdashboard');
+    await page.fill('input[name=email]', 'rhea@example.test');
+    await page.fill('input[name=password]', 'rhea-password-1');
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    await page.waitForURL('**/dashboard');
+    await context.close();
+  });
+
+  it('five wrong passwords show the rate-limit message', async () => {
+    const context = await browser.newContext();
+    const page = await context.newPage();
+    for (let i = 0; i < 5; i++) {
+      await signIn(page, 'coach@granite-hollow.test', `wrong-password-${i}`);
+      await page.waitForSelector('[role=alert], [aria-live] >> text=/match|Too many/');
+    }
+    await expect.poll(() => page.getByText(/Too many failed sign-ins/).isVisible()).toBe(true);
+    await context.close();
+  });
+});
+
+describe('inviting a colleague', () => {
+  it('the demo owner invites a coach; the mail arrives; the coach joins in a second browser and sees the team', async () => {
+    const ownerContext = await browser.newContext();
+    const owner = await ownerContext.newPage();
+    await signIn(owner, 'owner@granite-hollow.test', DEMO_PASSWORD);
+    await owner.waitForURL('**/dashboard');
+    await owner.goto('/team');
+    await owner.fill('input[name=email]', 'newcoach@example.test');
+    await owner.selectOption('select[name=role]', 'coach');
+    await owner.getByRole('button', { name: 'Send invitation' }).click();
+    await expect.poll(() => owner.getByText('newcoach@example.test').first().isVisible()).toBe(true);
+
+    const mail = await waitForMail((m) => m.to.includes('newcoach@example.test'));
+    expect(mail.subject).toContain('Granite Hollow Training Lab');
+    const link = linkFrom(mail, '/invitations/');
+
+    const coachContext = await browser.newContext();
+    const coach = await coachContext.newPage();
+    await coach.goto(link);
+    await coach.fill('input[name=name]', 'Nell Newcoach');
+    await coach.fill('input[name=password]', 'newcoach-password');
+    await coach.getByRole('button', { name: 'Join team' }).click();
+    await coach.waitForURL('**/dashboard');
+    expect(await coach.getByText('Granite Hollow Training Lab').first().isVisible()).toBe(true);
+    expect(await coach.getByText(/coach/i).first().isVisible()).toBe(true);
+
+    await owner.reload();
+    await expect.poll(() => owner.getByText('Nell Newcoach').first().isVisible()).toBe(true);
+    await ownerContext.close();
+    await coachContext.close();
+  });
+});

@@ -1,0 +1,106 @@
+import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
+import { existsSync, mkdtempSync } from 'node:fs';
+import { createServer } from 'node:net';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import type { TestProject } from 'vitest/node';
+import { startFakeSmtp, type FakeSmtp } from '../../lib/mail/fake-smtp';
+
+declare module 'vitest' {
+  export interface ProvidedContext {
+    baseURL: string;
+    mailDir: string;
+    databaseFile: string;
+  }
+}
+
+let server: ChildProcess | undefined;
+let smtp: FakeSmtp | undefined;
+
+function freePort(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const probe = createServer();
+    probe.once('error', reject);
+    probe.listen(0, '127.0.0.1', () => {
+      const address = probe.address();
+      const port = typeof address === 'object' && address ? address.port : 0;
+      probe.close(() => resolve(port));
+    });
+  });
+}
+
+async function waitUntilUp(url: string, child: ChildProcess, timeoutMs = 60_000): Promise<void> {
+  const started = Date.now();
+  while (Date.now() - started < timeoutMs) {
+    if (child.exitCode !== null) throw new Error(`next start exited with ${child.exitCode}`);
+    try {
+      const res = await fetch(url, { redirect: 'manual' });
+      if (res.status < 500) return;
+    } catch {
+      // not listening yet
+    }
+    await new Promise((r) => setTimeout(r, 250));
+  }
+  throw new Error(`The app did not answer at ${url} within ${timeoutMs} ms`);
+}
+
+/**
+ * Builds the app for production (unless E2E_REUSE_BUILD=1 and a build exists), prepares a fresh
+ * seeded database and a mail fake, and serves the build with `next start` on a free port.
+ */
+export default async function setup(project: TestProject) {
+  const root = process.cwd();
+  const work = mkdtempSync(path.join(tmpdir(), 'loadbearing-e2e-'));
+  const databaseFile = path.join(work, 'e2e.sqlite');
+  const mailDir = path.join(work, 'mail');
+  process.env.DATABASE_URL = databaseFile;
+
+  const { db } = await import('../../lib/db');
+  const { migrate, seed } = await import('../../db/migrate');
+  await migrate(db());
+  await seed(db());
+  await db().close();
+
+  smtp = await startFakeSmtp({ dropDir: mailDir });
+
+  const env = { ...process.env, NODE_ENV: 'production' as const, NEXT_TELEMETRY_DISABLED: '1' };
+  if (!(process.env.E2E_REUSE_BUILD === '1' && existsSync(path.join(root, '.next', 'BUILD_ID')))) {
+    console.log('Building the app for the browser tests (next build)…');
+    const build = spawnSync(process.execPath, [path.join(root, 'node_modules/next/dist/bin/next'), 'build'], {
+      cwd: root,
+      env,
+      stdio: 'inherit',
+    });
+    if (build.status !== 0) throw new Error('next build failed');
+  }
+
+  const port = await freePort();
+  const baseURL = `http://127.0.0.1:${port}`;
+  server = spawn(process.execPath, [path.join(root, 'node_modules/next/dist/bin/next'), 'start', '-p', String(port), '-H', '127.0.0.1'], {
+    cwd: root,
+    env: {
+      ...env,
+      PORT: String(port),
+      DATABASE_URL: databaseFile,
+      SESSION_SECRET: 'e2e-secret-that-is-long-enough-for-iron-session-0000',
+      COOKIE_SECURE: 'false',
+      APP_URL: baseURL,
+      SMTP_HOST: '127.0.0.1',
+      SMTP_PORT: String(smtp.port),
+      MAIL_DROP_DIR: mailDir,
+      STORAGE_DIR: path.join(work, 'uploads'),
+    },
+    stdio: ['ignore', 'inherit', 'inherit'],
+  });
+  await waitUntilUp(`${baseURL}/`, server);
+
+  project.provide('baseURL', baseURL);
+  project.provide('mailDir', mailDir);
+  project.provide('databaseFile', databaseFile);
+
+  return async () => {
+    // Stopped by its own PID: the server, not a wrapper around it.
+    server?.kill('SIGTERM');
+    await smtp?.close();
+  };
+}
