@@ -1,0 +1,71 @@
+'use server';
+
+import { redirect } from 'next/navigation';
+import { z } from 'zod';
+import { safeNextPath } from '@/components/auth/next-path';
+import { formAction } from '@/lib/auth/action';
+import { authenticate, confirmPasswordReset, requestPasswordReset, signUp } from '@/lib/auth/accounts';
+import { acceptInvitation } from '@/lib/teams/invitations';
+import { resetConfirmSchema, resetRequestSchema, signInSchema, signUpSchema } from '@/lib/validation/auth';
+
+// The forms carry where to return to and which invitation they answer; the shared schemas don't.
+const next = z.string().optional();
+const token = z
+  .string({ error: 'The invitation link is incomplete.' })
+  .min(10, { error: 'The invitation link is incomplete.' });
+
+export const signInAction = formAction(signInSchema.extend({ next }), async (data, { session, address }) => {
+  const user = await authenticate({ email: data.email, password: data.password }, address);
+  session.userId = user.id;
+  await session.save();
+  redirect(safeNextPath(data.next));
+});
+
+export const signUpAction = formAction(signUpSchema.extend({ next }), async (data, { session }) => {
+  const { user } = await signUp({
+    name: data.name,
+    email: data.email,
+    password: data.password,
+    teamName: data.teamName,
+  });
+  session.userId = user.id;
+  await session.save();
+  redirect(safeNextPath(data.next));
+});
+
+export const requestResetAction = formAction(resetRequestSchema, async (data) => {
+  await requestPasswordReset(data.email);
+  return {
+    ok: true,
+    message: `If an account uses ${data.email}, a reset link is on its way. It works once, for one hour.`,
+  };
+});
+
+export const confirmResetAction = formAction(resetConfirmSchema, async (data) => {
+  await confirmPasswordReset(data.token, data.password);
+  return { ok: true, message: 'Your password is changed. Sign in with the new one.' };
+});
+
+/** Joining as the person already signed in: nothing to fill in. */
+export const joinAsMemberAction = formAction(z.object({ token }), async (data, { session, signedIn }) => {
+  const result = await acceptInvitation(data.token, { userId: signedIn().userId });
+  session.userId = result.userId;
+  await session.save();
+  redirect('/dashboard');
+});
+
+/** Joining with a new account under the invited address. */
+export const joinWithAccountAction = formAction(
+  signUpSchema.pick({ name: true, password: true }).extend({ token }),
+  async (data, { session }) => {
+    const result = await acceptInvitation(data.token, { name: data.name, password: data.password });
+    session.userId = result.userId;
+    await session.save();
+    redirect('/dashboard');
+  },
+);
+
+export const signOutAction = formAction(z.object({}), async (_data, { session }) => {
+  session.destroy();
+  redirect('/');
+});

@@ -1,0 +1,30 @@
+import { LinkButton } from '@/components/ui/Button';
+import { Logo } from './Logo';
+
+/** The header of public pages: the way in, or back to work for someone already signed in. */
+export function PublicHeader({ signedIn }: { signedIn: boolean }) {
+  return (
+    <header className="border-line bg-paper border-b">
+      <div className="max-w-shell px-gutter mx-auto flex items-center justify-between gap-3 py-3">
+        <Logo />
+        <nav aria-label="Account" className="flex items-center gap-2">
+          {signedIn ? (
+            <LinkButton href="/dashboard" variant="primary" size="sm">
+              Go to dashboard
+            </LinkButton>
+          ) : (
+            <>
+              <LinkButton href="/sign-in" variant="ghost" size="sm">
+                Sign in
+              </LinkButton>
+              {/* Phones get this from the page itself; the header row has room for one button. */}
+              <LinkButton href="/sign-up" variant="primary" size="sm" className="hidden sm:inline-flex">
+                Create account
+              </LinkButton>
+            </>
+          )}
+        </nav>
+      </div>
+    </header>
+  );
+}
