@@ -61,7 +61,10 @@ export function formAction<T>(
       );
     } catch (error) {
       if (error instanceof AppError) {
-        return { message: error.message, values: withoutSecrets(values) };
+        // A domain error that names its field ("Already a member") shows under that field too.
+        const errors: Record<string, string[]> = {};
+        for (const issue of error.extra.issues ?? []) if (issue.path) (errors[issue.path] ??= []).push(issue.message);
+        return { message: error.message, errors, values: withoutSecrets(values) };
       }
       throw error;
     }
