@@ -1,7 +1,11 @@
+import { Appraisal } from './appraisal';
 import { AuditEvent } from './audit-event';
 import { Invitation } from './invitation';
+import { Mechanism } from './mechanism';
 import { Membership } from './membership';
 import { PasswordResetToken } from './password-reset-token';
+import { Review } from './review';
+import { Study } from './study';
 import { Team } from './team';
 import { User } from './user';
 
@@ -16,6 +20,19 @@ Invitation.belongsTo(User, { foreignKey: 'invitedById', as: 'invitedBy' });
 User.hasMany(PasswordResetToken, { foreignKey: 'userId', as: 'resetTokens' });
 PasswordResetToken.belongsTo(User, { foreignKey: 'userId', as: 'user' });
 AuditEvent.belongsTo(User, { foreignKey: 'actorId', as: 'actor' });
-
-export { AuditEvent, Invitation, Membership, PasswordResetToken, Team, User };
+// The review workbench (issue 4).
+Team.hasMany(Review, { foreignKey: 'teamId', as: 'reviews' });
+Review.belongsTo(Team, { foreignKey: 'teamId', as: 'team' });
+Review.belongsTo(User, { foreignKey: 'authorId', as: 'author' });
+Review.hasMany(Mechanism, { foreignKey: 'reviewId', as: 'mechanisms', onDelete: 'CASCADE' });
+Mechanism.belongsTo(Review, { foreignKey: 'reviewId', as: 'review' });
+Review.hasMany(Appraisal, { foreignKey: 'reviewId', as: 'appraisals', onDelete: 'CASCADE' });
+Appraisal.belongsTo(Review, { foreignKey: 'reviewId', as: 'review' });
+Mechanism.hasMany(Appraisal, { foreignKey: 'mechanismId', as: 'appraisals', onDelete: 'CASCADE' });
+Appraisal.belongsTo(Mechanism, { foreignKey: 'mechanismId', as: 'mechanism' });
+Team.hasMany(Study, { foreignKey: 'teamId', as: 'studies' });
+Study.belongsTo(Team, { foreignKey: 'teamId', as: 'team' });
+Study.hasMany(Appraisal, { foreignKey: 'studyId', as: 'appraisals' });
+Appraisal.belongsTo(Study, { foreignKey: 'studyId', as: 'study' });
+export { Appraisal, AuditEvent, Invitation, Mechanism, Membership, PasswordResetToken, Review, Study, Team, User };
 export { ROLES, type Role } from './roles';

@@ -12,11 +12,22 @@ async function main() {
   const smtpPort = Number(process.env.SMTP_PORT ?? 2525);
   const smtp = await startFakeSmtp({ port: smtpPort, dropDir: process.env.MAIL_DROP_DIR ?? 'db/data/mail' });
   console.log(`Mail fake listening on 127.0.0.1:${smtp.port}; read it at /dev/mail`);
+  // DOI lookups go to a local fake of the DOI service (demo DOIs 10.5555/…) unless DOI_BASE_URL is set.
+  const { startFakeDoiServer } = await import('../lib/citations/fake-doi-server');
+  const doiFake = process.env.DOI_BASE_URL
+    ? null
+    : await startFakeDoiServer({ port: Number(process.env.DOI_FAKE_PORT ?? 2580) });
+  if (doiFake) console.log(`DOI fake listening on ${doiFake.url}`);
 
   const port = process.env.PORT ?? '3000';
   const next = spawn(process.execPath, [path.resolve('node_modules/next/dist/bin/next'), 'dev', '-p', port], {
     stdio: 'inherit',
-    env: { ...process.env, NEXT_TELEMETRY_DISABLED: '1', SMTP_PORT: String(smtp.port) },
+    env: {
+      ...process.env,
+      NEXT_TELEMETRY_DISABLED: '1',
+      SMTP_PORT: String(smtp.port),
+      DOI_BASE_URL: doiFake?.url ?? process.env.DOI_BASE_URL,
+    },
   });
   await printDemoSignIns(`http://localhost:${port}`);
 
@@ -25,6 +36,7 @@ async function main() {
   process.on('SIGTERM', stop);
   next.on('exit', async (code) => {
     await smtp.close();
+    await doiFake?.close();
     process.exit(code ?? 0);
   });
 }

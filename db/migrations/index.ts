@@ -1,8 +1,12 @@
 import * as foundation from './20261201-0001-foundation';
+import * as workbench from './20261201-0002-workbench';
 
 /**
  * Every migration in the order it runs. Listed by hand (not globbed) so the same list works
  * under tsx, vitest and the Next.js server bundle. Append only: an applied migration is never
  * edited; a change is a new file.
  */
-export const migrations = [{ name: '20261201-0001-foundation', ...foundation }];
+export const migrations = [
+  { name: '20261201-0001-foundation', ...foundation },
+  { name: '20261201-0002-workbench', ...workbench },
+];

@@ -1,4 +1,8 @@
 import * as demoTeam from './20261201-0001-demo-team';
+import * as demoReviews from './20261201-0002-demo-reviews';
 
 /** Demo seeders in order; each runs once per database (recorded in schema_seeds). */
-export const seeders = [{ name: '20261201-0001-demo-team', ...demoTeam }];
+export const seeders = [
+  { name: '20261201-0001-demo-team', ...demoTeam },
+  { name: '20261201-0002-demo-reviews', ...demoReviews },
+];

@@ -146,6 +146,8 @@ export interface StudyDTO {
   tags: string[];
   hasPdf: boolean;
   createdAt: string;
+  /** How many appraisals (in any review of the team) use this study. */
+  appraisalCount: number;
 }
 
 export interface AppraisalDTO {
@@ -182,13 +184,222 @@ export interface WorkbenchDTO {
   appraisals: AppraisalDTO[];
   /** The library studies this review's appraisals point at. */
   studies: StudyDTO[];
+  /** Studies cited inline in the body (citation nodes), same team only; may overlap `studies`. */
+  citedStudies: StudyDTO[];
+  /** Mechanisms (or the outcome, null) with two or more compatible effect sizes: forest plots to offer. */
+  poolable: PoolableDTO[];
 }
 
 /** One entry's fate in a library import. */
 export interface ImportResultDTO {
+  /** 0-based position of the entry in the pasted text or file. */
   index: number;
   title: string | null;
   status: 'added' | 'duplicate' | 'failed';
   studyId?: number;
   reason?: string;
+}
+
+// ---------------------------------------------------------------------------------------------
+// Added by the server side of issue 4 (additions only; nothing above was renamed or removed).
+// ---------------------------------------------------------------------------------------------
+
+/** One line of the scoring engine's working: a sentence with its numbers (lib/scoring WorkingStep). */
+export interface WorkingStepDTO {
+  kind: string;
+  text: string;
+  values: Record<string, number>;
+}
+
+/** One step of an appraisal's certainty grading (lib/scoring CertaintyStep). */
+export interface CertaintyStepDTO {
+  domain: string;
+  /** For the first step ('design') the starting score; otherwise levels added (+) or removed (−). */
+  change: number;
+  reason: string;
+  /** Running score after this step, 1…4. */
+  score: number;
+}
+
+/** A mechanism in the verdict, ranked (1 = largest expected contribution). */
+export interface VerdictMechanismDTO {
+  id: number;
+  name: string;
+  stated: boolean;
+  rank: number;
+  probability: number;
+  term: string;
+  logOdds: number;
+  dosePenalty: number;
+  expectedContribution: number;
+  /** Fraction 0…1 of the summed expected contributions. */
+  share: number;
+  magnitude: Magnitude;
+  steps: WorkingStepDTO[];
+}
+
+export interface DoseCheckMechanismDTO {
+  id: number;
+  name: string;
+  minIntensity: number | null;
+  minEffort: Effort | null;
+  /** max(0, (I_min − I_protocol) / I_min); 0 when either is unknown. */
+  intensityShortfall: number;
+  /** max(0, (E_min − E_protocol) / 3); 0 when either is unknown. */
+  effortShortfall: number;
+  dosePenalty: number;
+}
+
+/** The protocol's dose against each mechanism's minimum stimulus (SCORING.md §3, §8). */
+export interface DoseCheckDTO {
+  protocolIntensity: number | null;
+  /** How the load became a fraction of maximum, in one sentence. */
+  intensityExplanation: string;
+  protocolEffort: Effort | null;
+  /** null when seconds per set, sets or sessions per day are not given. */
+  weeklySecondsUnderLoad: number | null;
+  /** null when sessions per day or minimum hours between sessions are not given. */
+  spacing: { ok: boolean; hoursNeeded: number } | null;
+  perMechanism: DoseCheckMechanismDTO[];
+}
+
+/** How one appraisal's certainty and applicability were reached, for the "how" panels. */
+export interface AppraisalWorkingDTO {
+  id: number;
+  studyId: number;
+  mechanismId: number | null;
+  direction: Direction;
+  certainty: CertaintyLevel;
+  certaintyScore: number;
+  certaintySteps: CertaintyStepDTO[];
+  /** Upgrades that were ticked but could not apply, and why. */
+  certaintyNotes: string[];
+  suggestedApplicability: number;
+  /** The population and dose reasons behind the suggestion. */
+  applicabilityReason: string;
+  applicability: number;
+  overridden: boolean;
+  /** This appraisal's term in the log-odds sum: s · w(c) · a · ln 4. */
+  logOddsTerm: number;
+}
+
+/** GET /api/reviews/:id/verdict — lib/scoring's scoreReview output (mechanism ids mapped back to rows), plus the dose check and each appraisal's working. */
+export interface VerdictDTO {
+  outcome: { probability: number; term: string; logOdds: number; steps: WorkingStepDTO[] };
+  mechanisms: VerdictMechanismDTO[];
+  evidenceWeight: number;
+  verdict: VerdictKey;
+  label: string;
+  steps: WorkingStepDTO[];
+  dose: DoseCheckDTO;
+  appraisals: AppraisalWorkingDTO[];
+}
+
+/** The two families of effect size the meta-analysis pools, never together (lib/reviews/meta.ts). */
+export type EffectMeasure = 'smd' | 'log-risk-ratio';
+
+/** A target (mechanism or the outcome) with two or more compatible effect sizes: a forest plot can be drawn. */
+export interface PoolableDTO {
+  mechanismId: number | null;
+  measure: EffectMeasure;
+  k: number;
+}
+
+/** lib/stats metaAnalysis output, as sent. */
+export interface MetaAnalysisStatsDTO {
+  k: number;
+  method: 'fixed' | 'DL' | 'REML';
+  estimate: number;
+  se: number;
+  ci: [number, number];
+  z: number;
+  p: number;
+  Q: number;
+  df: number;
+  pQ?: number;
+  tau2: number;
+  I2: number;
+  H2?: number;
+  /** Percent of the total weight per study, in the order of `studies`. */
+  weights: number[];
+  predictionInterval?: [number, number];
+}
+
+/** One row of the forest plot. */
+export interface ForestRowDTO {
+  appraisalId: number;
+  studyId: number;
+  citation: string;
+  direction: Direction;
+  yi: number;
+  vi: number;
+  ciLow: number;
+  ciHigh: number;
+  /** Random-effects weight, percent. */
+  weight: number;
+  /** Fixed-effect weight, percent. */
+  fixedWeight: number;
+  /** The effect data it came from, and whether it was converted to the pooled scale. */
+  source: EffectDataDTO['kind'];
+  converted: boolean;
+}
+
+/** GET /api/reviews/:id/meta-analysis?mechanism=<id>|outcome */
+export interface MetaAnalysisDTO {
+  mechanismId: number | null;
+  /** The mechanism's name, or "Claimed outcome". */
+  target: string;
+  k: number;
+  measure: EffectMeasure;
+  /** "Standardized mean difference (Hedges' g)" or "Log risk ratio". */
+  measureLabel: string;
+  studies: ForestRowDTO[];
+  fixed: MetaAnalysisStatsDTO;
+  random: MetaAnalysisStatsDTO;
+  /** Appraisals of the target left out, and why (no effect data, the other family). */
+  excluded: { appraisalId: number; studyId: number; citation: string; reason: string }[];
+}
+
+/** GET /api/studies */
+export interface StudyListDTO {
+  studies: StudyDTO[];
+  total: number;
+  page: number;
+  pageSize: number;
+}
+
+/** An appraisal of a study in some review of the team, for the study page. */
+export interface StudyAppraisalDTO extends AppraisalDTO {
+  reviewTitle: string;
+  /** null: the claimed outcome. */
+  mechanismName: string | null;
+}
+
+/** GET /api/studies/:id */
+export interface StudyDetailDTO {
+  study: StudyDTO;
+  appraisals: StudyAppraisalDTO[];
+}
+
+/** GET /api/studies/:id/citation?format=… */
+export interface CitationDTO {
+  format: 'apa' | 'bibtex' | 'ris' | 'csl';
+  mediaType: string;
+  filename: string;
+  text: string;
+  /** APA only: with the italics APA sets. */
+  html?: string;
+}
+
+/** 409 body of PATCH /api/reviews/:id with a stale version. */
+export interface ReviewConflictDTO {
+  error: string;
+  current: ReviewDTO;
+}
+
+/** 409 body of DELETE /api/studies/:id when appraisals use the study (send ?force=1 to delete them too). */
+export interface StudyInUseDTO {
+  error: string;
+  appraisalCount: number;
+  reviews: { id: number; title: string }[];
 }

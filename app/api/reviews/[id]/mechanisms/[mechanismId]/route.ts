@@ -1,0 +1,19 @@
+import { route } from '@/lib/auth/handler';
+import { deleteMechanism, updateMechanism } from '@/lib/reviews/commands';
+import { mechanismOf, reviewAccess } from '@/lib/reviews/queries';
+import { mechanismParams, mechanismUpdateSchema } from '@/lib/validation/reviews';
+
+// PATCH /api/reviews/:id/mechanisms/:mechanismId — any mechanism fields (author, owner) → { mechanism }.
+export const PATCH = route(
+  { params: mechanismParams, body: mechanismUpdateSchema },
+  async ({ params, body, authorize }) => {
+    authorize('review.update', await reviewAccess(params.id), 'That review');
+    return { mechanism: await updateMechanism(await mechanismOf(params.id, params.mechanismId), body) };
+  },
+);
+
+// DELETE /api/reviews/:id/mechanisms/:mechanismId — with its appraisals (author, owner) → { mechanism, deletedAppraisals }.
+export const DELETE = route({ params: mechanismParams }, async ({ params, authorize }) => {
+  authorize('review.update', await reviewAccess(params.id), 'That review');
+  return deleteMechanism(await mechanismOf(params.id, params.mechanismId));
+});

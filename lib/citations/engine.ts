@@ -1,0 +1,31 @@
+import { Cite, plugins } from '@citation-js/core';
+import '@citation-js/plugin-bibtex';
+import '@citation-js/plugin-ris';
+import '@citation-js/plugin-csl';
+
+/**
+ * citation-js, set up once. Importing the plugins registers them with the core.
+ *
+ * BibTeX titles are brought to sentence case on import (citation-js `parse.sentenceCase:
+ * 'english'`): by BibTeX convention titles are typed in title case with {braces} protecting
+ * proper nouns and acronyms, and the style decides the case. CSL styles cannot lower-case a
+ * title safely, so sentence-case styles print it as stored and the CSL maintainers advise
+ * storing titles in sentence case (citation-style-language/styles issue #91); APA wants article
+ * titles in sentence case and journal names in title case (American Psychological Association,
+ * 2020, Publication Manual, 7th ed., ch. 9). So we store what APA prints; the apa template
+ * title-cases the journal itself.
+ */
+const bibtexConfig = plugins.config.get('@bibtex');
+if (bibtexConfig) bibtexConfig.parse.sentenceCase = 'english';
+
+export { Cite, plugins };
+
+/**
+ * Input types we hand citation-js. Always forced: left to guess, citation-js treats a pasted
+ * URL as something to fetch (synchronously, from the server) — never wanted here.
+ */
+export const FORCED_TYPES = {
+  bibtex: '@biblatex/text',
+  ris: '@ris/file',
+  csl: '@csl/object',
+} as const;

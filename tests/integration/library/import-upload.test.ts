@@ -1,0 +1,133 @@
+import { readFileSync } from 'node:fs';
+import path from 'node:path';
+import { beforeAll, describe, expect, it } from 'vitest';
+import * as importRoute from '@/app/api/studies/import/route';
+import { Study } from '@/models';
+import { useTestApp } from '../../helpers/app';
+import { makeTeam, sendForm, snapshot, useDoiFakeAndStorage, type TeamFixture } from '../reviews/helpers';
+
+useTestApp();
+useDoiFakeAndStorage();
+let t: TeamFixture;
+const bytes = (name: string) =>
+  new Uint8Array(readFileSync(path.resolve(__dirname, '../../../fixtures/citations', name)));
+
+beforeAll(async () => {
+  t = await makeTeam('im');
+});
+
+describe('POST /api/studies/import — a .bib, .ris or .json file', () => {
+  it('imports the BibTeX fixture with a result per entry', async () => {
+    const res = await sendForm(t.coach, importRoute.POST, {
+      fields: { teamId: String(t.teamId) },
+      file: { name: 'library.bib', type: 'application/x-bibtex', bytes: bytes('library.bib') },
+    });
+    expect(res.status).toBe(201);
+    expect(res.body.results.map((r: { status: string }) => r.status)).toEqual([
+      'added',
+      'added',
+      'added',
+      'added',
+      'failed',
+      'failed',
+    ]);
+    expect(res.body.studies).toHaveLength(4);
+  });
+
+  it('imports RIS and CSL-JSON files by their extension', async () => {
+    const ris = await sendForm(t.coach, importRoute.POST, {
+      fields: { teamId: String(t.teamId) },
+      file: { name: 'export.RIS', type: 'application/octet-stream', bytes: bytes('library.ris') },
+    });
+    expect(ris.body.results.map((r: { status: string }) => r.status)).toEqual(['added', 'added', 'failed']);
+    const json = await sendForm(t.owner, importRoute.POST, {
+      fields: { teamId: String(t.teamId) },
+      file: { name: 'items.json', type: 'application/json', bytes: bytes('library.json') },
+    });
+    expect(json.body.results.map((r: { status: string }) => r.status)).toEqual(['added', 'failed']);
+  });
+
+  it('reads a file whose content does not match its extension as failed entries, not a crash', async () => {
+    const res = await sendForm(t.coach, importRoute.POST, {
+      fields: { teamId: String(t.teamId) },
+      file: { name: 'wrong.bib', type: 'text/plain', bytes: bytes('library.ris') },
+    });
+    expect(res.status).toBe(200);
+    expect(res.body.results).toEqual([
+      { index: 0, title: null, status: 'failed', reason: expect.stringMatching(/No BibTeX entries found/) },
+    ]);
+  });
+
+  it('refuses other file types (415), oversized uploads (413), a missing file or team (400) — storing nothing', async () => {
+    const before = await snapshot();
+    const pdf = await sendForm(t.coach, importRoute.POST, {
+      fields: { teamId: String(t.teamId) },
+      file: { name: 'paper.pdf', type: 'application/pdf', bytes: new Uint8Array([0x25, 0x50, 0x44, 0x46, 0x2d]) },
+    });
+    expect(pdf.status).toBe(415);
+    // Declared too large: refused from the header, before the body is read.
+    const declared = await sendForm(t.coach, importRoute.POST, {
+      fields: { teamId: String(t.teamId) },
+      file: { name: 'big.bib', type: 'text/plain', bytes: bytes('library.bib') },
+      headers: { 'content-length': String(11 * 1024 * 1024) },
+    });
+    expect(declared.status).toBe(413);
+    // Actually too large (an 11 MB file) with an honest length.
+    const big = new Uint8Array(11 * 1024 * 1024).fill(0x20);
+    const real = await sendForm(t.coach, importRoute.POST, {
+      fields: { teamId: String(t.teamId) },
+      file: { name: 'big.bib', type: 'text/plain', bytes: big },
+    });
+    expect(real.status).toBe(413);
+    const noFile = await sendForm(t.coach, importRoute.POST, { fields: { teamId: String(t.teamId) } });
+    expect(noFile.status).toBe(400);
+    expect(noFile.body.issues).toEqual([{ path: 'file', message: 'Required.' }]);
+    const noTeam = await sendForm(t.coach, importRoute.POST, {
+      file: { name: 'library.bib', type: 'text/plain', bytes: bytes('library.bib') },
+    });
+    expect(noTeam.status).toBe(400);
+    expect(noTeam.body.issues[0].path).toBe('teamId');
+    const json = await t.coach.call(importRoute.POST, { json: { teamId: t.teamId } });
+    expect(json.status).toBe(415);
+    expect(await snapshot()).toEqual(before);
+  });
+
+  it('is for owners and coaches of the team', async () => {
+    const before = await snapshot();
+    const form = {
+      fields: { teamId: String(t.teamId) },
+      file: { name: 'library.bib', type: 'text/plain', bytes: bytes('library.bib') },
+    };
+    expect((await sendForm(t.reviewer, importRoute.POST, form)).status).toBe(403);
+    expect((await sendForm(t.athlete, importRoute.POST, form)).status).toBe(403);
+    expect((await sendForm(t.outsider, importRoute.POST, form)).status).toBe(404);
+    expect((await sendForm(t.anonymous, importRoute.POST, form)).status).toBe(401);
+    expect(await snapshot()).toEqual(before);
+  });
+
+  it('imports a generated 2,000-entry BibTeX file within 10 s, streaming progress', async () => {
+    const entries = Array.from(
+      { length: 2000 },
+      (_, i) =>
+        `@article{gen${i},\n  author = {Vale, Jonah and Lindqvist, Sofie and Ostby, Runa},\n  title = {Generated study number ${i} on grip endurance},\n` +
+        `  journal = {Hollowridge Journal of Training Science},\n  year = {${2000 + (i % 25)}},\n  volume = {${1 + (i % 13)}},\n  pages = {${i}--${i + 9}},\n  doi = {10.5555/gen.${i}}\n}\n`,
+    ).join('\n');
+    const started = performance.now();
+    const res = await sendForm(t.coach, importRoute.POST, {
+      fields: { teamId: String(t.teamId) },
+      file: { name: 'big-library.bib', type: 'text/plain', bytes: new TextEncoder().encode(entries) },
+      headers: { accept: 'application/x-ndjson' },
+    });
+    const lines = (res.body as string)
+      .trim()
+      .split('\n')
+      .map((l) => JSON.parse(l));
+    const seconds = (performance.now() - started) / 1000;
+    const result = lines.at(-1);
+    expect(result.type).toBe('result');
+    expect(result.results.filter((r: { status: string }) => r.status === 'added')).toHaveLength(2000);
+    expect(lines.filter((l) => l.type === 'progress').length).toBeGreaterThan(3);
+    expect(await Study.count({ where: { teamId: t.teamId, doi: '10.5555/gen.1999' } })).toBe(1);
+    expect(seconds).toBeLessThan(10);
+  });
+});
