@@ -4,46 +4,29 @@
  * are 0…1 everywhere (intensity, prior, applicability), as in SCORING.md.
  */
 
+import type { Direction, Effort, Magnitude } from '@/lib/scoring/types';
+import type { Concern, StudyDesign, TrainingStatus, CertaintyLevel } from '@/lib/scoring/types';
+
 export const LOAD_UNITS = ['percent-max', 'percent-1rm', 'percent-mvc', 'percent-bodyweight', 'kg-added'] as const;
 export type LoadUnit = (typeof LOAD_UNITS)[number];
 
-export const EFFORTS = ['easy', 'moderate', 'hard', 'to-failure'] as const;
-export type Effort = (typeof EFFORTS)[number];
+// The model's own vocabularies come from the scoring engine, so the two can never drift apart.
+export { STUDY_DESIGNS, TRAINING_STATUSES } from '@/lib/scoring/constants';
+export { CONCERN_LEVELS as CONCERNS } from '@/lib/scoring/constants';
+export type { Concern, Direction, Effort, Magnitude, StudyDesign, TrainingStatus } from '@/lib/scoring/types';
 
-export const TRAINING_STATUSES = ['untrained', 'recreational', 'trained', 'elite'] as const;
-export type TrainingStatus = (typeof TRAINING_STATUSES)[number];
+/** In the order a form lists them. */
+export const EFFORTS = ['easy', 'moderate', 'hard', 'to-failure'] as const satisfies readonly Effort[];
+export const MAGNITUDES = ['none', 'small', 'moderate', 'large'] as const satisfies readonly Magnitude[];
+export const DIRECTIONS = ['supports', 'against', 'neutral'] as const satisfies readonly Direction[];
 
 export const REVIEW_STATUSES = ['draft', 'in-review', 'approved', 'published', 'archived'] as const;
 export type ReviewStatus = (typeof REVIEW_STATUSES)[number];
 
-export const MAGNITUDES = ['none', 'small', 'moderate', 'large'] as const;
-export type Magnitude = (typeof MAGNITUDES)[number];
-
-export const DIRECTIONS = ['supports', 'against', 'neutral'] as const;
-export type Direction = (typeof DIRECTIONS)[number];
-
-export const CONCERNS = ['none', 'serious', 'very-serious'] as const;
-export type Concern = (typeof CONCERNS)[number];
-
-export const STUDY_DESIGNS = [
-  'meta-analysis',
-  'randomized',
-  'non-randomized',
-  'cohort',
-  'case-control',
-  'cross-sectional',
-  'case-series',
-  'case-report',
-  'expert-opinion',
-  'animal',
-  'in-vitro',
-] as const;
-export type StudyDesign = (typeof STUDY_DESIGNS)[number];
-
 export const MECHANISM_KINDS = ['physiological', 'perceptual', 'skill', 'non-specific'] as const;
 export type MechanismKind = (typeof MECHANISM_KINDS)[number];
 
-export type CertaintyLevel = 'high' | 'moderate' | 'low' | 'very-low';
+export type { CertaintyLevel } from '@/lib/scoring/types';
 
 /** The claim's dose, as the coach entered it, plus the one intensity scale the scoring uses. */
 export interface ProtocolDTO {
