@@ -5,7 +5,7 @@
  */
 
 import type { Direction, Effort, Magnitude } from '@/lib/scoring/types';
-import type { Concern, StudyDesign, TrainingStatus, CertaintyLevel } from '@/lib/scoring/types';
+import type { CertaintyLevel, Concern, StudyDesign, TrainingStatus, VerdictKey } from '@/lib/scoring/types';
 
 export const LOAD_UNITS = ['percent-max', 'percent-1rm', 'percent-mvc', 'percent-bodyweight', 'kg-added'] as const;
 export type LoadUnit = (typeof LOAD_UNITS)[number];
@@ -158,7 +158,7 @@ export interface AppraisalDTO {
   applicability: number;
 }
 
-export type VerdictKey = 'insufficient' | 'not-supported' | 'uncertain' | 'supported' | 'other-reasons';
+export type { VerdictKey } from '@/lib/scoring/types';
 
 /** GET /api/reviews/:id — everything the workbench needs in one read. */
 export interface WorkbenchDTO {
