@@ -1,10 +1,14 @@
 import { Appraisal } from './appraisal';
+import { Comment } from './comment';
 import { AuditEvent } from './audit-event';
 import { Invitation } from './invitation';
 import { Mechanism } from './mechanism';
 import { Membership } from './membership';
 import { PasswordResetToken } from './password-reset-token';
 import { Review } from './review';
+import { ReviewRound } from './review-round';
+import { RoundInvitation } from './round-invitation';
+import { Scorecard } from './scorecard';
 import { Study } from './study';
 import { Team } from './team';
 import { User } from './user';
@@ -34,5 +38,17 @@ Team.hasMany(Study, { foreignKey: 'teamId', as: 'studies' });
 Study.belongsTo(Team, { foreignKey: 'teamId', as: 'team' });
 Study.hasMany(Appraisal, { foreignKey: 'studyId', as: 'appraisals' });
 Appraisal.belongsTo(Study, { foreignKey: 'studyId', as: 'study' });
+// Peer review (issue 5).
+Review.hasMany(ReviewRound, { foreignKey: 'reviewId', as: 'rounds', onDelete: 'CASCADE' });
+ReviewRound.belongsTo(Review, { foreignKey: 'reviewId', as: 'review' });
+ReviewRound.hasMany(RoundInvitation, { foreignKey: 'roundId', as: 'invitations', onDelete: 'CASCADE' });
+RoundInvitation.belongsTo(ReviewRound, { foreignKey: 'roundId', as: 'round' });
+RoundInvitation.belongsTo(User, { foreignKey: 'reviewerId', as: 'reviewer' });
+ReviewRound.hasMany(Scorecard, { foreignKey: 'roundId', as: 'scorecards', onDelete: 'CASCADE' });
+Scorecard.belongsTo(ReviewRound, { foreignKey: 'roundId', as: 'round' });
+Review.hasMany(Comment, { foreignKey: 'reviewId', as: 'comments', onDelete: 'CASCADE' });
+Comment.belongsTo(User, { foreignKey: 'authorId', as: 'author' });
+
+export { Comment, ReviewRound, RoundInvitation, Scorecard };
 export { Appraisal, AuditEvent, Invitation, Mechanism, Membership, PasswordResetToken, Review, Study, Team, User };
 export { ROLES, type Role } from './roles';

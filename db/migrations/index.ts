@@ -1,5 +1,6 @@
 import * as foundation from './20261201-0001-foundation';
 import * as workbench from './20261201-0002-workbench';
+import * as peerReview from './20261201-0003-peer-review';
 
 /**
  * Every migration in the order it runs. Listed by hand (not globbed) so the same list works
@@ -9,4 +10,5 @@ import * as workbench from './20261201-0002-workbench';
 export const migrations = [
   { name: '20261201-0001-foundation', ...foundation },
   { name: '20261201-0002-workbench', ...workbench },
+  { name: '20261201-0003-peer-review', ...peerReview },
 ];

@@ -1,8 +1,10 @@
 import * as demoTeam from './20261201-0001-demo-team';
 import * as demoReviews from './20261201-0002-demo-reviews';
+import * as demoRounds from './20261201-0003-demo-rounds';
 
 /** Demo seeders in order; each runs once per database (recorded in schema_seeds). */
 export const seeders = [
   { name: '20261201-0001-demo-team', ...demoTeam },
   { name: '20261201-0002-demo-reviews', ...demoReviews },
+  { name: '20261201-0003-demo-rounds', ...demoRounds },
 ];

@@ -38,6 +38,9 @@ const roles =
 const authorOrOwner: Rule = (role, actor, resource) =>
   role === 'owner' || (role === 'coach' && resource.authorId === actor.userId);
 
+const roundMember: Rule = (role, actor, resource) =>
+  authorOrOwner(role, actor, resource) || resource.invited === true ? true : 'hidden';
+
 export const POLICY = {
   'team.read': roles(...ANY),
   'team.members.list': roles('owner'),
@@ -56,6 +59,13 @@ export const POLICY = {
   'review.round.scorecard': (_role, _actor, resource) => (resource.invited === true ? true : 'hidden'),
   'review.round.agreement': (role, actor, resource) =>
     authorOrOwner(role, actor, resource) || (resource.invited === true && resource.submitted === true),
+  // Settling a round (resolutions, closing, "closed without", resolving comment threads): the
+  // review's author or the owner.
+  'review.round.settle': authorOrOwner,
+  // A round and its threads: the review's author, the owner and the invited reviewers; to
+  // anyone else (another coach, an uninvited reviewer, an athlete) the round does not exist.
+  'review.round.read': roundMember,
+  'review.round.comment': roundMember,
   'review.publish': (role, _actor, resource) =>
     role === 'owner' || (role === 'coach' && resource.coachesMayPublish === true),
   'study.read': roles(...STAFF),

@@ -34,6 +34,9 @@ const EXPECTED: Record<Action, Row> = {
   'review.round.open': { owner: A, coach: F, reviewer: F, athlete: F },
   'review.round.scorecard': { owner: N, coach: N, reviewer: N, athlete: N },
   'review.round.agreement': { owner: A, coach: F, reviewer: F, athlete: F },
+  'review.round.settle': { owner: A, coach: F, reviewer: F, athlete: F },
+  'review.round.read': { owner: A, coach: N, reviewer: N, athlete: N },
+  'review.round.comment': { owner: A, coach: N, reviewer: N, athlete: N },
   'review.publish': { owner: A, coach: F, reviewer: F, athlete: F },
   'study.read': { owner: A, coach: A, reviewer: A, athlete: F },
   'study.write': { owner: A, coach: A, reviewer: F, athlete: F },
@@ -83,6 +86,17 @@ describe('policy: relations that change the answer', () => {
   it('agreement: an invited reviewer sees it only after submitting', () => {
     expect(decide(actorWith('reviewer'), 'review.round.agreement', { ...theirs, invited: true })).toBe('forbidden');
     expect(decide(actorWith('reviewer'), 'review.round.agreement', { ...theirs, invited: true, submitted: true })).toBe('allow');
+  });
+
+  it('round comments: the author and invited reviewers take part; settling stays with the author and owner', () => {
+    expect(decide(actorWith('coach'), 'review.round.comment', mine)).toBe('allow');
+    expect(decide(actorWith('coach'), 'review.round.read', mine)).toBe('allow');
+    expect(decide(actorWith('reviewer'), 'review.round.read', { ...theirs, invited: true })).toBe('allow');
+    expect(decide(actorWith('reviewer'), 'review.round.comment', { ...theirs, invited: true })).toBe('allow');
+    expect(decide(actorWith('coach'), 'review.round.settle', mine)).toBe('allow');
+    expect(decide(actorWith('reviewer'), 'review.round.settle', { ...theirs, invited: true, submitted: true })).toBe(
+      'forbidden',
+    );
   });
 
   it('publish: a coach only where the team lets coaches publish', () => {
