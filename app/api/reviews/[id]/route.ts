@@ -1,11 +1,14 @@
+import { assertReviewEditable, assertSeesScores } from '@/lib/rounds/freeze';
 import { route } from '@/lib/auth/handler';
 import { deleteReview, updateReview } from '@/lib/reviews/commands';
 import { getReviewDTO, getWorkbench, reviewAccess } from '@/lib/reviews/queries';
 import { reviewParams, updateReviewSchema } from '@/lib/validation/reviews';
 
 // GET /api/reviews/:id — the workbench: review, mechanisms, appraisals, studies (staff of the team) → WorkbenchDTO.
-export const GET = route({ params: reviewParams }, async ({ params, authorize }) => {
+export const GET = route({ params: reviewParams }, async ({ params, authorize, signedIn }) => {
   authorize('review.read', await reviewAccess(params.id), 'That review');
+  // Blind scoring: an invited reviewer who has not submitted reads the round page, not the workbench.
+  await assertSeesScores(signedIn().userId, params.id);
   return getWorkbench(params.id);
 });
 
@@ -15,6 +18,7 @@ export const PATCH = route(
   async ({ params, body, authorize, signedIn }) => {
     const access = await reviewAccess(params.id);
     authorize('review.update', access, 'That review');
+    await assertReviewEditable(params.id);
     if (body.status === 'published') authorize('review.publish', access, 'That review');
     const outcome = await updateReview(params.id, signedIn().userId, body);
     if (outcome.ok) return { review: outcome.review };

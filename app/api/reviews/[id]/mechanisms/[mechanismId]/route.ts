@@ -1,3 +1,4 @@
+import { assertReviewEditable } from '@/lib/rounds/freeze';
 import { route } from '@/lib/auth/handler';
 import { deleteMechanism, updateMechanism } from '@/lib/reviews/commands';
 import { mechanismOf, reviewAccess } from '@/lib/reviews/queries';
@@ -8,6 +9,7 @@ export const PATCH = route(
   { params: mechanismParams, body: mechanismUpdateSchema },
   async ({ params, body, authorize }) => {
     authorize('review.update', await reviewAccess(params.id), 'That review');
+    await assertReviewEditable(params.id);
     return { mechanism: await updateMechanism(await mechanismOf(params.id, params.mechanismId), body) };
   },
 );
@@ -15,5 +17,6 @@ export const PATCH = route(
 // DELETE /api/reviews/:id/mechanisms/:mechanismId — with its appraisals (author, owner) → { mechanism, deletedAppraisals }.
 export const DELETE = route({ params: mechanismParams }, async ({ params, authorize }) => {
   authorize('review.update', await reviewAccess(params.id), 'That review');
+  await assertReviewEditable(params.id);
   return deleteMechanism(await mechanismOf(params.id, params.mechanismId));
 });
