@@ -52,3 +52,16 @@ Comment.belongsTo(User, { foreignKey: 'authorId', as: 'author' });
 export { Comment, ReviewRound, RoundInvitation, Scorecard };
 export { Appraisal, AuditEvent, Invitation, Mechanism, Membership, PasswordResetToken, Review, Study, Team, User };
 export { ROLES, type Role } from './roles';
+
+// Publishing and following (issue 6).
+import { Follow } from './follow';
+import { Publication, PublishedVersion } from './published-version';
+Review.hasOne(Publication, { foreignKey: 'reviewId', as: 'publication' });
+Publication.belongsTo(Review, { foreignKey: 'reviewId', as: 'review' });
+Publication.belongsTo(Team, { foreignKey: 'teamId', as: 'team' });
+Publication.hasMany(PublishedVersion, { foreignKey: 'publicationId', as: 'versions', onDelete: 'CASCADE' });
+PublishedVersion.belongsTo(Publication, { foreignKey: 'publicationId', as: 'publication' });
+Team.hasMany(Follow, { foreignKey: 'teamId', as: 'follows' });
+Follow.belongsTo(Team, { foreignKey: 'teamId', as: 'team' });
+Follow.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+export { Follow, Publication, PublishedVersion };

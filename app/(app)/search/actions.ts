@@ -1,0 +1,17 @@
+'use server';
+
+import { z } from 'zod';
+import { formAction } from '@/lib/auth/action';
+import { reviewAccess } from '@/lib/reviews/queries';
+import { copyMechanism } from '@/lib/search/reuse';
+import { idParam } from '@/lib/validation/reviews';
+
+const copySchema = z.object({ mechanismId: idParam, sourceReviewId: idParam, targetReviewId: idParam });
+
+// Copies a past review's mechanism (with its appraisals) into the review being written.
+export const copyMechanismAction = formAction(copySchema, async (data, { authorize }) => {
+  authorize('review.read', await reviewAccess(data.sourceReviewId), 'That review');
+  authorize('review.update', await reviewAccess(data.targetReviewId), 'That review');
+  const { appraisals } = await copyMechanism(data.mechanismId, data.targetReviewId);
+  return { ok: true, message: `Copied, with ${appraisals} ${appraisals === 1 ? 'appraisal' : 'appraisals'}.` };
+});

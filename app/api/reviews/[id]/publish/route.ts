@@ -1,0 +1,20 @@
+import { route } from '@/lib/auth/handler';
+import { publishAccess, publishReview } from '@/lib/publishing/commands';
+import { publicationOfReview } from '@/lib/publishing/queries';
+import { reviewAccess } from '@/lib/reviews/queries';
+import { publishBody, publishParams } from '@/lib/validation/publishing';
+
+// GET /api/reviews/:id/publish — the review's publication (slug, visibility, latest version, withdrawal) or null (staff).
+export const GET = route({ params: publishParams }, async ({ params, authorize }) => {
+  authorize('review.read', await reviewAccess(params.id), 'That review');
+  return { publication: await publicationOfReview(params.id) };
+});
+
+// POST /api/reviews/:id/publish {visibility, changeNote?} — a new immutable version, mails to followers (owner, or coach where the team allows) → 201 PublishResultDTO.
+export const POST = route(
+  { params: publishParams, body: publishBody },
+  async ({ params, body, authorize, signedIn }) => {
+    authorize('review.publish', await publishAccess(params.id), 'That review');
+    return Response.json(await publishReview(params.id, signedIn(), body), { status: 201 });
+  },
+);

@@ -1,0 +1,96 @@
+'use client';
+
+import Link from 'next/link';
+import { useActionState, useDeferredValue } from 'react';
+import useSWR from 'swr';
+import { copyMechanismAction } from '@/app/(app)/search/actions';
+import { Badge } from '@/components/ui/Badge';
+import { SubmitButton } from '@/components/ui/SubmitButton';
+import type { FormState } from '@/lib/auth/action';
+import type { SearchResultDTO } from '@/lib/search/search';
+import { apiFetch } from '@/lib/swr/fetcher';
+import { Highlight } from './Highlight';
+
+/**
+ * Past reviews like the claim being typed, under the claim form (and in a new review, with
+ * their mechanisms to copy). Quiet until a few words are typed; a failed lookup shows nothing
+ * rather than getting in the way of writing.
+ */
+export function SimilarReviews({
+  teamId,
+  claim,
+  targetReviewId,
+}: {
+  teamId: number;
+  claim: string;
+  targetReviewId?: number;
+}) {
+  const q = useDeferredValue(claim.trim());
+  const key =
+    q.length >= 8 ? `/api/search?kind=review&limit=5&teamId=${teamId}&q=${encodeURIComponent(q.slice(0, 200))}` : null;
+  const { data } = useSWR(key, (url: string) => apiFetch<{ results: SearchResultDTO[] }>(url), {
+    keepPreviousData: true,
+  });
+  const results = (data?.results ?? []).filter((r) => r.id !== targetReviewId && r.score < 0.6);
+  if (!key || !results.length) return null;
+  return (
+    <section aria-labelledby="similar-heading" className="border-line bg-paper-sunken rounded-lg border p-4">
+      <h2 id="similar-heading" className="font-semibold">
+        Similar past reviews
+      </h2>
+      <p className="text-ink-muted text-sm">
+        Your team may have weighed this before: reuse its mechanisms and evidence.
+      </p>
+      <ul className="mt-3 space-y-3">
+        {results.map((r) => (
+          <li key={r.id}>
+            <Link href={r.href} className="font-semibold hover:underline">
+              <Highlight text={r.title} field="title" matches={r.matches} />
+            </Link>
+            {r.verdict && <Badge className="ml-2">{r.verdict}</Badge>}
+            <p className="text-ink-muted text-sm">
+              <Highlight text={r.detail} field="claim" matches={r.matches} />
+            </p>
+            {targetReviewId && <MechanismsToCopy sourceReviewId={r.id} targetReviewId={targetReviewId} />}
+          </li>
+        ))}
+      </ul>
+    </section>
+  );
+}
+
+function MechanismsToCopy({ sourceReviewId, targetReviewId }: { sourceReviewId: number; targetReviewId: number }) {
+  // The workbench read of the past review (staff only, like this panel), for its mechanisms.
+  const { data } = useSWR(`/api/reviews/${sourceReviewId}`, (url: string) =>
+    apiFetch<{ mechanisms: { id: number; name: string }[] }>(url),
+  );
+  const mechanisms = data?.mechanisms ?? [];
+  if (!mechanisms.length) return null;
+  return (
+    <ul className="mt-1 space-y-1 pl-4">
+      {mechanisms.map((m) => (
+        <li key={m.id}>
+          <CopyForm mechanismId={m.id} name={m.name} sourceReviewId={sourceReviewId} targetReviewId={targetReviewId} />
+        </li>
+      ))}
+    </ul>
+  );
+}
+
+function CopyForm(props: { mechanismId: number; name: string; sourceReviewId: number; targetReviewId: number }) {
+  const [state, action] = useActionState<FormState, FormData>(copyMechanismAction, {});
+  return (
+    <form action={action} className="flex flex-wrap items-center gap-2 text-sm">
+      <input type="hidden" name="mechanismId" value={props.mechanismId} />
+      <input type="hidden" name="sourceReviewId" value={props.sourceReviewId} />
+      <input type="hidden" name="targetReviewId" value={props.targetReviewId} />
+      <span>{props.name}</span>
+      <SubmitButton size="sm" variant="secondary" aria-label={`Copy “${props.name}” with its appraisals`}>
+        Copy
+      </SubmitButton>
+      <span aria-live="polite" className="text-ink-muted">
+        {state.message}
+      </span>
+    </form>
+  );
+}

@@ -1,0 +1,159 @@
+import { Op } from 'sequelize';
+import { bodyPlainText } from '@/lib/publishing/render-body';
+import type { FuzzyIndex } from './engine';
+import { Mechanism, Review, Study } from '@/models';
+import {
+  BODY_CHARS,
+  newIndex,
+  searchIndex,
+  type MechanismDoc,
+  type ReviewDoc,
+  type SearchDoc,
+  type SearchFilters,
+  type SearchHit,
+  type StudyDoc,
+} from './documents';
+
+/**
+ * One fuse.js index per team, built the first time the team is searched and then kept current
+ * by the change hooks below (upsert and remove), never rebuilt per request. Kept on globalThis:
+ * Next bundles route handlers, pages and server actions separately, and they must share one
+ * store (one Node process, like the sign-in throttle in lib/auth/rate-limit.ts).
+ *
+ * The hooks are called by the code that changes the data: `onReviewChanged(reviewId)` after a
+ * review, its mechanisms or its body change (or it is deleted), `onStudyChanged(studyId)` after a
+ * library study changes (or is deleted). A hook for a team whose index was never built does
+ * nothing: the lazy build will read the current rows.
+ */
+
+interface TeamIndex {
+  fuse: FuzzyIndex<SearchDoc>;
+}
+
+const store = globalThis as unknown as { loadbearingSearch?: Map<number, Promise<TeamIndex>> };
+const teams = () => (store.loadbearingSearch ??= new Map());
+
+export function reviewDoc(review: Review, mechanisms: Pick<Mechanism, 'name'>[]): ReviewDoc {
+  return {
+    kind: 'review',
+    key: `review:${review.id}`,
+    id: review.id,
+    teamId: review.teamId,
+    reviewId: review.id,
+    title: review.title,
+    claim: review.claim,
+    tags: review.tags ?? [],
+    mechanisms: mechanisms.map((m) => m.name),
+    body: bodyPlainText(review.body).slice(0, BODY_CHARS),
+    status: review.status,
+    verdict: review.verdict,
+    slug: review.slug,
+  };
+}
+
+export function mechanismDoc(m: Mechanism, review: Pick<Review, 'id' | 'teamId' | 'title'>): MechanismDoc {
+  return {
+    kind: 'mechanism',
+    key: `mechanism:${m.id}`,
+    id: m.id,
+    teamId: review.teamId,
+    reviewId: review.id,
+    reviewTitle: review.title,
+    name: m.name,
+    summary: m.summary,
+  };
+}
+
+export function studyDoc(s: Study): StudyDoc {
+  return {
+    kind: 'study',
+    key: `study:${s.id}`,
+    id: s.id,
+    teamId: s.teamId,
+    title: s.title,
+    citation: s.citation,
+    journal: s.journal ?? '',
+    doi: s.doi ?? '',
+    tags: s.tags ?? [],
+  };
+}
+
+async function build(teamId: number): Promise<TeamIndex> {
+  const reviews = await Review.findAll({ where: { teamId } });
+  const mechanisms = reviews.length
+    ? await Mechanism.findAll({
+        where: { reviewId: { [Op.in]: reviews.map((r) => r.id) } },
+        order: [['position', 'ASC']],
+      })
+    : [];
+  const studies = await Study.findAll({ where: { teamId } });
+  const byReview = new Map<number, Mechanism[]>();
+  for (const m of mechanisms) byReview.set(m.reviewId, [...(byReview.get(m.reviewId) ?? []), m]);
+  const reviewById = new Map(reviews.map((r) => [r.id, r]));
+  const docs: SearchDoc[] = [
+    ...reviews.map((r) => reviewDoc(r, byReview.get(r.id) ?? [])),
+    ...mechanisms.map((m) => mechanismDoc(m, reviewById.get(m.reviewId)!)),
+    ...studies.map(studyDoc),
+  ];
+  return { fuse: newIndex(docs) };
+}
+
+function teamIndex(teamId: number): Promise<TeamIndex> {
+  let index = teams().get(teamId);
+  if (!index) {
+    index = build(teamId);
+    // A failed build is not kept, so the next search tries again.
+    index.catch(() => teams().delete(teamId));
+    teams().set(teamId, index);
+  }
+  return index;
+}
+
+function removeWhere(index: TeamIndex, predicate: (doc: SearchDoc) => boolean) {
+  index.fuse.removeWhere(predicate);
+}
+
+function addAll(index: TeamIndex, docs: SearchDoc[]) {
+  for (const doc of docs) index.fuse.upsert(doc);
+}
+
+/** Keeps the indexes current after a review, its mechanisms or its body changed, or it was deleted. */
+export async function onReviewChanged(reviewId: number): Promise<void> {
+  const review = await Review.findByPk(reviewId);
+  for (const [teamId, pending] of teams()) {
+    if (review && review.teamId !== teamId) continue;
+    const index = await pending;
+    removeWhere(index, (d) => (d.kind === 'review' || d.kind === 'mechanism') && d.reviewId === reviewId);
+    if (!review) continue;
+    const mechanisms = await Mechanism.findAll({ where: { reviewId }, order: [['position', 'ASC']] });
+    addAll(index, [reviewDoc(review, mechanisms), ...mechanisms.map((m) => mechanismDoc(m, review))]);
+  }
+}
+
+/** Keeps the indexes current after a library study changed or was deleted. */
+export async function onStudyChanged(studyId: number): Promise<void> {
+  const study = await Study.findByPk(studyId);
+  for (const [teamId, pending] of teams()) {
+    if (study && study.teamId !== teamId) continue;
+    const index = await pending;
+    removeWhere(index, (d) => d.kind === 'study' && d.id === studyId);
+    if (study) addAll(index, [studyDoc(study)]);
+  }
+}
+
+/** Searches the given teams' indexes (the caller decided which the actor may search), best first. */
+export async function searchTeams(teamIds: number[], q: string, filters: SearchFilters = {}): Promise<SearchHit[]> {
+  const hits: SearchHit[] = [];
+  for (const teamId of teamIds) hits.push(...searchIndex((await teamIndex(teamId)).fuse, q, filters));
+  return hits.sort((a, b) => a.score - b.score).slice(0, filters.limit ?? 30);
+}
+
+/** For tests: forget every index (the next search rebuilds lazily). */
+export function resetSearchIndexes(): void {
+  teams().clear();
+}
+
+/** For tests and the benchmark: whether a team's index is built (it is never built per request). */
+export function isIndexBuilt(teamId: number): boolean {
+  return teams().has(teamId);
+}

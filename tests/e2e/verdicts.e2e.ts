@@ -1,0 +1,179 @@
+import axe from 'axe-core';
+import type { Page } from 'playwright-core';
+import sqlite3 from 'sqlite3';
+import { describe, expect, inject, it } from 'vitest';
+import { linkFrom, useBrowser, waitForMail } from './browser';
+
+const browser = useBrowser();
+const DEMO_PASSWORD = 'loadbearing-demo';
+// Unique to this file: no other journey signs in as the second demo athlete.
+const ATHLETE = 'athlete2@granite-hollow.test';
+const PHONE = { width: 375, height: 812 };
+
+async function signIn(page: Page, email: string) {
+  await page.goto('/sign-in');
+  await page.fill('input[name=email]', email);
+  await page.fill('input[name=password]', DEMO_PASSWORD);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await page.waitForURL('**/dashboard');
+}
+
+/** Stands in for a closed peer-review round (issue 5's module): the review becomes "approved". */
+function markApproved(reviewId: number): Promise<void> {
+  return new Promise((resolve, reject) => {
+    const database = new sqlite3.Database(inject('databaseFile'));
+    database.configure('busyTimeout', 5000);
+    database.run("UPDATE reviews SET status = 'approved' WHERE id = ?", [reviewId], (err) => {
+      database.close();
+      if (err) reject(err);
+      else resolve();
+    });
+  });
+}
+
+async function seriousAxeViolations(page: Page) {
+  await page.addScriptTag({ content: axe.source });
+  const result = (await page.evaluate(() =>
+    (window as unknown as { axe: typeof axe }).axe.run(document, { resultTypes: ['violations'] }),
+  )) as axe.AxeResults;
+  return result.violations
+    .filter((v) => v.impact === 'serious' || v.impact === 'critical')
+    .map((v) => `${v.id} (${v.impact}): ${v.nodes.map((n) => n.target.join(' ')).join(', ')}`);
+}
+
+describe('publishing a verdict to a following athlete', () => {
+  it('the owner publishes an approved review; the following athlete gets the mail, reads it on a phone, and finds it again by a misspelled word', async () => {
+    // The athlete follows the team from their verdicts page.
+    const athleteContext = await browser.newContext({ viewport: PHONE });
+    const athlete = await athleteContext.newPage();
+    await signIn(athlete, ATHLETE);
+    await athlete.goto('/verdicts');
+    await athlete.getByRole('button', { name: /Follow Granite Hollow Training Lab/ }).click();
+    await expect.poll(() => athlete.getByText(/You will get an e-mail when Granite Hollow/).isVisible()).toBe(true);
+
+    // The owner writes a review, it is approved, and the owner publishes it for the team.
+    const ownerContext = await browser.newContext();
+    const owner = await ownerContext.newPage();
+    await signIn(owner, 'owner@granite-hollow.test');
+    const me = await (await owner.request.get('/api/me')).json();
+    const teamId = me.teams.find((t: { slug: string }) => t.slug === 'granite-hollow').id;
+    const claim = 'Sauna sessions after bouldering thicken finger pulleys within a month.';
+    const created = await owner.request.post('/api/reviews', {
+      data: {
+        teamId,
+        claim,
+        claimSource: 'A post on a training forum',
+        protocol: {
+          exercise: 'Max hang on a 20 mm edge',
+          loadValue: 10,
+          loadUnit: 'kg-added',
+          referenceBodyweightKg: 70,
+          referenceMaxAddedKg: 30,
+          secondsPerSet: 10,
+          setsPerSession: 5,
+          sessionsPerDay: 1,
+          daysPerWeek: 3,
+          minHoursBetween: null,
+          weeks: 4,
+          effort: 'hard',
+        },
+        population: { status: 'recreational', injured: false },
+        tags: ['fingers', 'sauna'],
+      },
+    });
+    expect(created.status()).toBe(201);
+    const reviewId = (await created.json()).review.id as number;
+    const mech = await owner.request.post(`/api/reviews/${reviewId}/mechanisms`, {
+      data: {
+        name: 'Connective-tissue remodelling',
+        kind: 'physiological',
+        summary: 'Heat said to speed up collagen turnover.',
+        stated: true,
+        prior: 0.2,
+      },
+    });
+    expect(mech.status()).toBe(201);
+    await markApproved(reviewId);
+    const published = await owner.request.post(`/api/reviews/${reviewId}/publish`, { data: { visibility: 'team' } });
+    expect(published.status()).toBe(201);
+    const slug = (await published.json()).slug as string;
+
+    // The mail reaches the fake; its link opens the verdict on the athlete's phone.
+    const mail = await waitForMail((m) => m.to.includes(ATHLETE) && m.subject.includes('Sauna sessions'));
+    expect(mail.text).toMatch(/Stop on pain/);
+    expect(linkFrom(mail, '/unsubscribe/')).toContain('/unsubscribe/');
+    const link = linkFrom(mail, '/v/');
+    expect(link).toContain(`/v/${slug}`);
+    const response = await athlete.goto(link);
+    expect(response?.status()).toBe(200);
+    await expect.poll(() => athlete.getByRole('heading', { level: 1, name: claim }).isVisible()).toBe(true);
+    expect(await athlete.getByText('Verdict:').isVisible()).toBe(true);
+    expect(await athlete.getByRole('complementary', { name: 'Safety' }).first().isVisible()).toBe(true);
+    expect(await athlete.getByRole('heading', { name: 'The protocol, in everyday words' }).isVisible()).toBe(true);
+    expect(await athlete.getByRole('table').getByText('70 kg').first().isVisible()).toBe(true);
+    // Readable on a phone: nothing wider than the screen.
+    expect(await athlete.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(PHONE.width);
+    await athlete.screenshot({ path: '/tmp/verdict-phone.png', fullPage: true });
+
+    // Months later: a half-remembered, misspelled word on the verdicts page finds it again.
+    await athlete.goto('/verdicts');
+    await athlete.getByLabel('Search the verdicts').fill('sawna pulleys');
+    const hit = athlete.getByRole('link', { name: claim });
+    await expect.poll(() => hit.isVisible(), { timeout: 10_000 }).toBe(true);
+    expect(await athlete.locator('mark').first().isVisible()).toBe(true);
+    await athlete.screenshot({ path: '/tmp/verdict-search-phone.png', fullPage: true });
+    await hit.click();
+    await athlete.waitForURL(`**/v/${slug}`);
+
+    await athleteContext.close();
+    await ownerContext.close();
+  });
+});
+
+describe('what a signed-out visitor sees', () => {
+  it('reads a public verdict, with its versions, and gets 404 for a team-only one', async () => {
+    const context = await browser.newContext({ viewport: PHONE });
+    const page = await context.newPage();
+    const ok = await page.goto('/v/cold-plunges-after-strength');
+    expect(ok?.status()).toBe(200);
+    expect(await page.getByRole('heading', { level: 1 }).textContent()).toMatch(/cold plunge/i);
+    expect(await page.getByText(/Version 2, published/).isVisible()).toBe(true);
+    await page.getByRole('link', { name: /All versions and what changed/ }).click();
+    await page.waitForURL('**/v/cold-plunges-after-strength/versions');
+    expect(await page.getByText(/What changed: Added what to do instead/).isVisible()).toBe(true);
+    await page.getByRole('link', { name: 'Version 1' }).click();
+    await expect.poll(() => page.getByText(/You are reading version 1, an earlier version/).isVisible()).toBe(true);
+
+    const hidden = await page.goto('/v/weighted-pull-up-ladder');
+    expect(hidden?.status()).toBe(404);
+    expect(await page.getByRole('heading', { name: 'This verdict was not found' }).isVisible()).toBe(true);
+    expect(await page.content()).not.toMatch(/lock-off/i);
+
+    const feed = await page.request.get('/feed.xml');
+    expect(feed.headers()['content-type']).toContain('application/atom+xml');
+    expect(await feed.text()).toContain('/v/cold-plunges-after-strength');
+    await context.close();
+  });
+});
+
+describe('accessibility of the verdict page', () => {
+  it('axe-core finds no serious or critical violation on /v/[slug], on a desktop and on a phone', async () => {
+    for (const viewport of [undefined, PHONE]) {
+      const context = await browser.newContext({ viewport });
+      const page = await context.newPage();
+      await page.goto('/v/cold-plunges-after-strength');
+      expect(await seriousAxeViolations(page)).toEqual([]);
+      await context.close();
+    }
+  });
+
+  it('the axe check itself fails on a page with a known serious violation (so the check above can fail)', async () => {
+    const context = await browser.newContext();
+    const page = await context.newPage();
+    await page.setContent(
+      '<html lang="en"><body><main><img src="x.png"><p style="color:#eee;background:#fff">faint</p></main></body></html>',
+    );
+    expect((await seriousAxeViolations(page)).join('\n')).toMatch(/image-alt|color-contrast/);
+    await context.close();
+  });
+});
