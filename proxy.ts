@@ -14,5 +14,5 @@ export function proxy(request: NextRequest) {
 }
 
 export const config = {
-  matcher: ['/dashboard/:path*', '/team/:path*', '/reviews/:path*', '/library/:path*', '/search/:path*'],
+  matcher: ['/dashboard/:path*', '/team/:path*', '/reviews/:path*', '/library/:path*', '/search/:path*', '/verdicts/:path*'],
 };

@@ -7,7 +7,8 @@ const NAV: readonly NavItem[] = [
   { href: '/dashboard', label: 'Dashboard' },
   { href: '/reviews', label: 'Reviews' },
   { href: '/library', label: 'Library' },
-  { href: '/search', label: 'Search', soon: true },
+  { href: '/verdicts', label: 'Verdicts' },
+  { href: '/search', label: 'Search' },
   { href: '/team', label: 'Team' },
 ];
 

@@ -141,6 +141,12 @@ export async function onStudyChanged(studyId: number): Promise<void> {
   }
 }
 
+/** Re-indexes the studies an import or a hand entry resolved to; passes the import's result through. */
+export async function reindexStudies<T extends { studies: { id: number }[] }>(result: T): Promise<T> {
+  for (const study of result.studies) await onStudyChanged(study.id);
+  return result;
+}
+
 /** Searches the given teams' indexes (the caller decided which the actor may search), best first. */
 export async function searchTeams(teamIds: number[], q: string, filters: SearchFilters = {}): Promise<SearchHit[]> {
   const hits: SearchHit[] = [];

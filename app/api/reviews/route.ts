@@ -1,3 +1,4 @@
+import { onReviewChanged } from '@/lib/search/index-store';
 import { withBlindVerdictsHidden } from '@/lib/rounds/freeze';
 import { route } from '@/lib/auth/handler';
 import { createReview } from '@/lib/reviews/commands';
@@ -14,5 +15,7 @@ export const GET = route({ query: reviewListQuery }, async ({ query, authorize, 
 // POST /api/reviews — captures a claim, its protocol and population as a draft (owner, coach) → 201 { review }.
 export const POST = route({ body: createReviewSchema }, async ({ body, authorize, signedIn }) => {
   authorize('review.create', { teamId: body.teamId }, 'That team');
-  return Response.json({ review: await createReview(signedIn().userId, body) }, { status: 201 });
+  const review = await createReview(signedIn().userId, body);
+  await onReviewChanged(review.id);
+  return Response.json({ review }, { status: 201 });
 });

@@ -1,3 +1,4 @@
+import { reindexStudies } from '@/lib/search/index-store';
 import { route } from '@/lib/auth/handler';
 import { importSource } from '@/lib/library/import';
 import { importResponse } from '@/lib/library/respond';
@@ -18,8 +19,11 @@ export const POST = route({ body: createStudySchema }, async ({ req, body, autho
   const meta = studyMetaOf(body);
   if (body.source === undefined) {
     const created = await createStudyByHand(body.teamId, userId, { ...body, ...meta });
+    await reindexStudies(created);
     return Response.json(created, { status: created.results[0].status === 'added' ? 201 : 200 });
   }
   const source = body.source;
-  return importResponse(req, (onProgress) => importSource(body.teamId, userId, source, { meta, onProgress }));
+  return importResponse(req, async (onProgress) =>
+    reindexStudies(await importSource(body.teamId, userId, source, { meta, onProgress })),
+  );
 });

@@ -1,3 +1,4 @@
+import { onReviewChanged } from '@/lib/search/index-store';
 import { assertReviewEditable, assertSeesScores } from '@/lib/rounds/freeze';
 import { route } from '@/lib/auth/handler';
 import { deleteReview, updateReview } from '@/lib/reviews/commands';
@@ -21,7 +22,10 @@ export const PATCH = route(
     await assertReviewEditable(params.id);
     if (body.status === 'published') authorize('review.publish', access, 'That review');
     const outcome = await updateReview(params.id, signedIn().userId, body);
-    if (outcome.ok) return { review: outcome.review };
+    if (outcome.ok) {
+      await onReviewChanged(params.id);
+      return { review: outcome.review };
+    }
     const error = 'Someone else saved this review after you opened it. Reload it, or keep your text as a copy.';
     return Response.json({ error, current: outcome.current }, { status: 409 });
   },
@@ -32,5 +36,6 @@ export const DELETE = route({ params: reviewParams }, async ({ params, authorize
   authorize('review.delete', await reviewAccess(params.id), 'That review');
   const review = await getReviewDTO(params.id);
   await deleteReview(params.id, signedIn().userId);
+  await onReviewChanged(params.id);
   return { review };
 });

@@ -1,3 +1,4 @@
+import { onStudyChanged } from '@/lib/search/index-store';
 import { route } from '@/lib/auth/handler';
 import { deleteStudy, studyById, studyDetail, updateStudy } from '@/lib/library/studies';
 import { deleteStudyQuery, studyParams, updateStudySchema } from '@/lib/validation/studies';
@@ -15,7 +16,9 @@ export const PATCH = route(
   async ({ params, body, authorize, signedIn }) => {
     const study = await studyById(params.id);
     authorize('study.write', { teamId: study.teamId }, 'That study');
-    return { study: await updateStudy(study, signedIn().userId, body) };
+    const updated = await updateStudy(study, signedIn().userId, body);
+    await onStudyChanged(study.id);
+    return { study: updated };
   },
 );
 
@@ -27,6 +30,7 @@ export const DELETE = route(
     authorize('study.write', { teamId: study.teamId }, 'That study');
     const outcome = await deleteStudy(study, signedIn().userId, query.force === '1');
     if (!outcome.ok) return Response.json(outcome.body, { status: 409 });
+    await onStudyChanged(study.id);
     return { study: outcome.study, deletedAppraisals: outcome.deletedAppraisals };
   },
 );

@@ -1,3 +1,4 @@
+import { reindexStudies } from '@/lib/search/index-store';
 import { route } from '@/lib/auth/handler';
 import { importFile, MAX_IMPORT_BYTES } from '@/lib/library/import';
 import { importResponse } from '@/lib/library/respond';
@@ -12,5 +13,7 @@ export const POST = route({}, async ({ req, authorize, signedIn }) => {
   authorize('study.write', { teamId }, 'That team');
   const file = fileField(form, 'library file');
   const { userId } = signedIn();
-  return importResponse(req, (onProgress) => importFile(teamId, userId, file, { onProgress }));
+  return importResponse(req, async (onProgress) =>
+    reindexStudies(await importFile(teamId, userId, file, { onProgress })),
+  );
 });

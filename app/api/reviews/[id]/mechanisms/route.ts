@@ -1,3 +1,4 @@
+import { onReviewChanged } from '@/lib/search/index-store';
 import { assertReviewEditable } from '@/lib/rounds/freeze';
 import { route } from '@/lib/auth/handler';
 import { createMechanism } from '@/lib/reviews/commands';
@@ -8,5 +9,7 @@ import { mechanismSchema, reviewParams } from '@/lib/validation/reviews';
 export const POST = route({ params: reviewParams, body: mechanismSchema }, async ({ params, body, authorize }) => {
   authorize('review.update', await reviewAccess(params.id), 'That review');
   await assertReviewEditable(params.id);
-  return Response.json({ mechanism: await createMechanism(params.id, body) }, { status: 201 });
+  const mechanism = await createMechanism(params.id, body);
+  await onReviewChanged(params.id);
+  return Response.json({ mechanism }, { status: 201 });
 });

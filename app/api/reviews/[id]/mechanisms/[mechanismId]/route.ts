@@ -1,3 +1,4 @@
+import { onReviewChanged } from '@/lib/search/index-store';
 import { assertReviewEditable } from '@/lib/rounds/freeze';
 import { route } from '@/lib/auth/handler';
 import { deleteMechanism, updateMechanism } from '@/lib/reviews/commands';
@@ -10,7 +11,9 @@ export const PATCH = route(
   async ({ params, body, authorize }) => {
     authorize('review.update', await reviewAccess(params.id), 'That review');
     await assertReviewEditable(params.id);
-    return { mechanism: await updateMechanism(await mechanismOf(params.id, params.mechanismId), body) };
+    const mechanism = await updateMechanism(await mechanismOf(params.id, params.mechanismId), body);
+    await onReviewChanged(params.id);
+    return { mechanism };
   },
 );
 
@@ -18,5 +21,7 @@ export const PATCH = route(
 export const DELETE = route({ params: mechanismParams }, async ({ params, authorize }) => {
   authorize('review.update', await reviewAccess(params.id), 'That review');
   await assertReviewEditable(params.id);
-  return deleteMechanism(await mechanismOf(params.id, params.mechanismId));
+  const deleted = await deleteMechanism(await mechanismOf(params.id, params.mechanismId));
+  await onReviewChanged(params.id);
+  return deleted;
 });
