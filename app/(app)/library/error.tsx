@@ -1,0 +1,7 @@
+'use client';
+
+import { ErrorPanel } from '@/components/layout/ErrorPanel';
+
+export default function LibraryError({ error, retry }: { error: unknown; retry: () => void }) {
+  return <ErrorPanel error={error} retry={retry} home={{ href: '/dashboard', label: 'Back to dashboard' }} />;
+}

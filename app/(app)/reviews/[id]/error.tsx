@@ -1,0 +1,7 @@
+'use client';
+
+import { ErrorPanel } from '@/components/layout/ErrorPanel';
+
+export default function WorkbenchError({ error, retry }: { error: unknown; retry: () => void }) {
+  return <ErrorPanel error={error} retry={retry} home={{ href: '/reviews', label: 'Back to reviews' }} />;
+}

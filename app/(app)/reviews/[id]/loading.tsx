@@ -1,0 +1,5 @@
+import { WorkbenchSkeleton } from '@/components/review/Workbench';
+
+export default function Loading() {
+  return <WorkbenchSkeleton />;
+}

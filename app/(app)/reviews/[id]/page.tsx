@@ -1,0 +1,32 @@
+import type { Metadata } from 'next';
+import { notFound } from 'next/navigation';
+import { cache } from 'react';
+import { toViewer } from '@/components/review/viewer';
+import { Workbench } from '@/components/review/Workbench';
+import { requirePageActor } from '@/lib/auth/current';
+import { decide } from '@/lib/auth/policy';
+import { getWorkbench, reviewAccess } from '@/lib/reviews/queries';
+
+type Props = { params: Promise<{ id: string }> };
+
+/** The workbench data when the review exists and the signed-in person may read it; else 404. */
+const load = cache(async (rawId: string) => {
+  const id = Number(rawId);
+  if (!Number.isInteger(id) || id <= 0) notFound();
+  const actor = await requirePageActor(`/reviews/${rawId}`);
+  const access = await reviewAccess(id).catch(() => null);
+  // Another team's review answers like a missing one: its existence is not confirmed.
+  if (!access || decide(actor, 'review.read', access) !== 'allow') notFound();
+  return { actor, workbench: await getWorkbench(id) };
+});
+
+export async function generateMetadata({ params }: Props): Promise<Metadata> {
+  const { workbench } = await load((await params).id);
+  return { title: workbench.review.title };
+}
+
+// GET /reviews/:id — the workbench: editor left, verdict right (stacked on a phone).
+export default async function ReviewWorkbenchPage({ params }: Props) {
+  const { actor, workbench } = await load((await params).id);
+  return <Workbench reviewId={workbench.review.id} viewer={toViewer(actor)} fallback={workbench} />;
+}

@@ -1,0 +1,29 @@
+'use client';
+
+import { NodeViewWrapper, type ReactNodeViewProps } from '@tiptap/react';
+import { cn } from '@/components/ui/cn';
+import { useOptionalWorkbenchContext } from '@/components/review/workbench-context';
+
+/** An inline author–year citation, looked up in the library each time it renders. */
+export function CitationView({ node, selected }: ReactNodeViewProps) {
+  const workbench = useOptionalWorkbenchContext();
+  const id = node.attrs.studyId as number | null;
+  const study = id == null ? undefined : workbench?.studies.get(id);
+  const text = study ? study.citation : id == null ? 'no study' : 'study not in library';
+  return (
+    <NodeViewWrapper
+      as="span"
+      contentEditable={false}
+      data-testid="citation"
+      data-study-id={id ?? ''}
+      title={study ? `${study.title}${study.journal ? ` — ${study.journal}` : ''}` : undefined}
+      className={cn(
+        'bg-rope-50 text-accent-text decoration-rope-300 mx-px rounded-sm px-0.5 decoration-dotted',
+        !study && 'text-ink-muted italic',
+        selected && 'ring-rope-500 ring-2',
+      )}
+    >
+      ({text})
+    </NodeViewWrapper>
+  );
+}
