@@ -1,6 +1,7 @@
 'use client';
 
 import { useRouter } from 'next/navigation';
+import { SimilarReviews } from '@/components/search/SimilarReviews';
 import { useId, useState, type FormEvent, type ReactNode } from 'react';
 import { useSWRConfig } from 'swr';
 import { Button } from '@/components/ui/Button';
@@ -209,229 +210,236 @@ export function ClaimForm({
   };
 
   return (
-    <form onSubmit={submit} noValidate className="space-y-6">
-      <FormMessage state={{ ok: false, message }} />
+    <>
+      <form onSubmit={submit} noValidate className="space-y-6">
+        <FormMessage state={{ ok: false, message }} />
 
-      <Section title="The claim" description="As it was made: one sentence, in the claim’s own terms.">
-        {!editing && teams && teams.length > 1 && (
-          <SelectField
-            label="Team"
-            {...field('teamId')}
-            value={draft.teamId}
-            onChange={(e) => set('teamId', e.target.value)}
-            options={teams.map((t) => ({ value: String(t.id), label: t.name }))}
-          />
-        )}
-        {!editing && teams && teams.length === 1 && <input type="hidden" name="teamId" value={draft.teamId} />}
-        <TextAreaField
-          label="Claim"
-          {...field('claim')}
-          rows={2}
-          help="e.g. “Light daily hangs make fingers stronger.”"
-          value={draft.claim}
-          onChange={(e) => set('claim', e.target.value)}
-          required
-        />
-        <TextField
-          label="Who made it and where"
-          {...field('claimSource')}
-          help="A person, account or outlet, and the medium: “A climbing coach in a short video, March 2026”."
-          value={draft.claimSource}
-          onChange={(e) => set('claimSource', e.target.value)}
-        />
-        <TextField
-          label="Link to the claim"
-          {...field('claimUrl')}
-          optional
-          type="url"
-          inputMode="url"
-          placeholder="https://"
-          value={draft.claimUrl}
-          onChange={(e) => set('claimUrl', e.target.value)}
-        />
-        <TextField
-          label="Review title"
-          {...field('title')}
-          optional
-          help="Left empty, the claim is used as the title."
-          value={draft.title}
-          onChange={(e) => set('title', e.target.value)}
-        />
-      </Section>
-
-      <Section
-        title="The protocol"
-        description="The dose the claim prescribes. Leave out what the claim does not say; unknowns count as unknown, not as zero."
-      >
-        <TextField
-          label="Exercise"
-          {...field('exercise', 'protocol.exercise')}
-          help="e.g. “Half-crimp hang on a 20 mm edge”, “Back squat”."
-          value={draft.exercise}
-          onChange={(e) => set('exercise', e.target.value)}
-        />
-        <div className="grid gap-4 sm:grid-cols-[10rem_1fr]">
-          <TextField
-            label="Load"
-            {...field('loadValue', 'protocol.loadValue')}
-            optional
-            inputMode="decimal"
-            value={draft.loadValue}
-            onChange={(e) => set('loadValue', e.target.value)}
-          />
-          <SelectField
-            label="Unit of the load"
-            {...field('loadUnit', 'protocol.loadUnit')}
-            optional
-            help={
-              draft.loadUnit
-                ? LOAD_UNIT_HELP[draft.loadUnit]
-                : 'Every unit is converted to one scale: a fraction of the athlete’s maximum.'
-            }
-            value={draft.loadUnit}
-            onChange={(e) => set('loadUnit', e.target.value as LoadUnit | '')}
-            options={[
-              { value: '', label: 'Choose a unit' },
-              ...LOAD_UNITS.map((u) => ({ value: u, label: LOAD_UNIT_LABEL[u] })),
-            ]}
-          />
-        </div>
-        {bodyweightUnit && (
-          <div className="border-line-strong grid gap-4 rounded-md border border-dashed px-4 py-3 sm:grid-cols-2">
-            <p className="text-ink-muted text-sm sm:col-span-2">
-              The reference athlete the claim has in mind, to turn a body-weight load into a share of their maximum.
-            </p>
-            <TextField
-              label="Reference body weight (kg)"
-              {...field('referenceBodyweightKg', 'protocol.referenceBodyweightKg')}
-              inputMode="decimal"
-              value={draft.referenceBodyweightKg}
-              onChange={(e) => set('referenceBodyweightKg', e.target.value)}
+        <Section title="The claim" description="As it was made: one sentence, in the claim’s own terms.">
+          {!editing && teams && teams.length > 1 && (
+            <SelectField
+              label="Team"
+              {...field('teamId')}
+              value={draft.teamId}
+              onChange={(e) => set('teamId', e.target.value)}
+              options={teams.map((t) => ({ value: String(t.id), label: t.name }))}
             />
+          )}
+          {!editing && teams && teams.length === 1 && <input type="hidden" name="teamId" value={draft.teamId} />}
+          <TextAreaField
+            label="Claim"
+            {...field('claim')}
+            rows={2}
+            help="e.g. “Light daily hangs make fingers stronger.”"
+            value={draft.claim}
+            onChange={(e) => set('claim', e.target.value)}
+            required
+          />
+          <TextField
+            label="Who made it and where"
+            {...field('claimSource')}
+            help="A person, account or outlet, and the medium: “A climbing coach in a short video, March 2026”."
+            value={draft.claimSource}
+            onChange={(e) => set('claimSource', e.target.value)}
+          />
+          <TextField
+            label="Link to the claim"
+            {...field('claimUrl')}
+            optional
+            type="url"
+            inputMode="url"
+            placeholder="https://"
+            value={draft.claimUrl}
+            onChange={(e) => set('claimUrl', e.target.value)}
+          />
+          <TextField
+            label="Review title"
+            {...field('title')}
+            optional
+            help="Left empty, the claim is used as the title."
+            value={draft.title}
+            onChange={(e) => set('title', e.target.value)}
+          />
+        </Section>
+
+        <Section
+          title="The protocol"
+          description="The dose the claim prescribes. Leave out what the claim does not say; unknowns count as unknown, not as zero."
+        >
+          <TextField
+            label="Exercise"
+            {...field('exercise', 'protocol.exercise')}
+            help="e.g. “Half-crimp hang on a 20 mm edge”, “Back squat”."
+            value={draft.exercise}
+            onChange={(e) => set('exercise', e.target.value)}
+          />
+          <div className="grid gap-4 sm:grid-cols-[10rem_1fr]">
             <TextField
-              label="Their maximum added load (kg)"
-              {...field('referenceMaxAddedKg', 'protocol.referenceMaxAddedKg')}
+              label="Load"
+              {...field('loadValue', 'protocol.loadValue')}
+              optional
               inputMode="decimal"
-              help="The most they can add for this exercise; negative if they need assistance."
-              value={draft.referenceMaxAddedKg}
-              onChange={(e) => set('referenceMaxAddedKg', e.target.value)}
+              value={draft.loadValue}
+              onChange={(e) => set('loadValue', e.target.value)}
+            />
+            <SelectField
+              label="Unit of the load"
+              {...field('loadUnit', 'protocol.loadUnit')}
+              optional
+              help={
+                draft.loadUnit
+                  ? LOAD_UNIT_HELP[draft.loadUnit]
+                  : 'Every unit is converted to one scale: a fraction of the athlete’s maximum.'
+              }
+              value={draft.loadUnit}
+              onChange={(e) => set('loadUnit', e.target.value as LoadUnit | '')}
+              options={[
+                { value: '', label: 'Choose a unit' },
+                ...LOAD_UNITS.map((u) => ({ value: u, label: LOAD_UNIT_LABEL[u] })),
+              ]}
             />
           </div>
-        )}
-        <p
-          className="bg-granite-50 text-granite-900 rounded-md px-3 py-2 text-sm"
-          aria-live="polite"
-          data-testid="intensity-preview"
-        >
-          {conversion
-            ? conversion.intensity !== null
-              ? `Intensity ${percent(conversion.intensity)} of maximum. ${conversion.explanation}`
-              : conversion.explanation
-            : 'Enter a load and its unit to see the intensity on the common scale.'}
-        </p>
-        <div className="grid grid-cols-2 gap-4 lg:grid-cols-3">
-          <TextField
-            label="Seconds per set"
-            help="Time under load in one set."
-            {...field('secondsPerSet', 'protocol.secondsPerSet')}
+          {bodyweightUnit && (
+            <div className="border-line-strong grid gap-4 rounded-md border border-dashed px-4 py-3 sm:grid-cols-2">
+              <p className="text-ink-muted text-sm sm:col-span-2">
+                The reference athlete the claim has in mind, to turn a body-weight load into a share of their maximum.
+              </p>
+              <TextField
+                label="Reference body weight (kg)"
+                {...field('referenceBodyweightKg', 'protocol.referenceBodyweightKg')}
+                inputMode="decimal"
+                value={draft.referenceBodyweightKg}
+                onChange={(e) => set('referenceBodyweightKg', e.target.value)}
+              />
+              <TextField
+                label="Their maximum added load (kg)"
+                {...field('referenceMaxAddedKg', 'protocol.referenceMaxAddedKg')}
+                inputMode="decimal"
+                help="The most they can add for this exercise; negative if they need assistance."
+                value={draft.referenceMaxAddedKg}
+                onChange={(e) => set('referenceMaxAddedKg', e.target.value)}
+              />
+            </div>
+          )}
+          <p
+            className="bg-granite-50 text-granite-900 rounded-md px-3 py-2 text-sm"
+            aria-live="polite"
+            data-testid="intensity-preview"
+          >
+            {conversion
+              ? conversion.intensity !== null
+                ? `Intensity ${percent(conversion.intensity)} of maximum. ${conversion.explanation}`
+                : conversion.explanation
+              : 'Enter a load and its unit to see the intensity on the common scale.'}
+          </p>
+          <div className="grid grid-cols-2 gap-4 lg:grid-cols-3">
+            <TextField
+              label="Seconds per set"
+              help="Time under load in one set."
+              {...field('secondsPerSet', 'protocol.secondsPerSet')}
+              optional
+              inputMode="decimal"
+              value={draft.secondsPerSet}
+              onChange={(e) => set('secondsPerSet', e.target.value)}
+            />
+            <TextField
+              label="Sets per session"
+              {...field('setsPerSession', 'protocol.setsPerSession')}
+              optional
+              inputMode="numeric"
+              value={draft.setsPerSession}
+              onChange={(e) => set('setsPerSession', e.target.value)}
+            />
+            <TextField
+              label="Sessions per day"
+              {...field('sessionsPerDay', 'protocol.sessionsPerDay')}
+              optional
+              inputMode="numeric"
+              value={draft.sessionsPerDay}
+              onChange={(e) => set('sessionsPerDay', e.target.value)}
+            />
+            <TextField
+              label="Days per week"
+              {...field('daysPerWeek', 'protocol.daysPerWeek')}
+              optional
+              inputMode="numeric"
+              help="Empty means every day."
+              value={draft.daysPerWeek}
+              onChange={(e) => set('daysPerWeek', e.target.value)}
+            />
+            <TextField
+              label="Rest between sessions (h)"
+              help="The minimum, in hours."
+              {...field('minHoursBetween', 'protocol.minHoursBetween')}
+              optional
+              inputMode="decimal"
+              value={draft.minHoursBetween}
+              onChange={(e) => set('minHoursBetween', e.target.value)}
+            />
+            <TextField
+              label="Weeks"
+              {...field('weeks', 'protocol.weeks')}
+              optional
+              inputMode="decimal"
+              value={draft.weeks}
+              onChange={(e) => set('weeks', e.target.value)}
+            />
+          </div>
+          <SelectField
+            label="Effort"
+            {...field('effort', 'protocol.effort')}
             optional
-            inputMode="decimal"
-            value={draft.secondsPerSet}
-            onChange={(e) => set('secondsPerSet', e.target.value)}
+            help="How hard each set feels at its end."
+            value={draft.effort}
+            onChange={(e) => set('effort', e.target.value as Effort | '')}
+            options={[
+              { value: '', label: 'Not stated' },
+              ...EFFORTS.map((e) => ({ value: e, label: EFFORT_LABEL[e] })),
+            ]}
           />
-          <TextField
-            label="Sets per session"
-            {...field('setsPerSession', 'protocol.setsPerSession')}
-            optional
-            inputMode="numeric"
-            value={draft.setsPerSession}
-            onChange={(e) => set('setsPerSession', e.target.value)}
-          />
-          <TextField
-            label="Sessions per day"
-            {...field('sessionsPerDay', 'protocol.sessionsPerDay')}
-            optional
-            inputMode="numeric"
-            value={draft.sessionsPerDay}
-            onChange={(e) => set('sessionsPerDay', e.target.value)}
-          />
-          <TextField
-            label="Days per week"
-            {...field('daysPerWeek', 'protocol.daysPerWeek')}
-            optional
-            inputMode="numeric"
-            help="Empty means every day."
-            value={draft.daysPerWeek}
-            onChange={(e) => set('daysPerWeek', e.target.value)}
-          />
-          <TextField
-            label="Rest between sessions (h)"
-            help="The minimum, in hours."
-            {...field('minHoursBetween', 'protocol.minHoursBetween')}
-            optional
-            inputMode="decimal"
-            value={draft.minHoursBetween}
-            onChange={(e) => set('minHoursBetween', e.target.value)}
-          />
-          <TextField
-            label="Weeks"
-            {...field('weeks', 'protocol.weeks')}
-            optional
-            inputMode="decimal"
-            value={draft.weeks}
-            onChange={(e) => set('weeks', e.target.value)}
-          />
-        </div>
-        <SelectField
-          label="Effort"
-          {...field('effort', 'protocol.effort')}
-          optional
-          help="How hard each set feels at its end."
-          value={draft.effort}
-          onChange={(e) => set('effort', e.target.value as Effort | '')}
-          options={[{ value: '', label: 'Not stated' }, ...EFFORTS.map((e) => ({ value: e, label: EFFORT_LABEL[e] }))]}
-        />
-      </Section>
+        </Section>
 
-      <Section title="Who it is for" description="The people the claim promises the result to.">
-        <SelectField
-          label="Training status"
-          {...field('status', 'population.status')}
-          optional
-          value={draft.status}
-          onChange={(e) => set('status', e.target.value as TrainingStatus | '')}
-          options={[
-            { value: '', label: 'Not stated' },
-            ...TRAINING_STATUSES.map((s) => ({ value: s, label: TRAINING_STATUS_LABEL[s] })),
-          ]}
-        />
-        <CheckboxField
-          label="Injured athletes (rehabilitation)"
-          {...field('injured', 'population.injured')}
-          checked={draft.injured}
-          onChange={(e) => set('injured', e.target.checked)}
-        />
-        <TextField
-          label="Tags"
-          {...field('tags')}
-          optional
-          help="Comma-separated, e.g. fingers, tendon, hangboard."
-          value={draft.tags}
-          onChange={(e) => set('tags', e.target.value)}
-        />
-      </Section>
+        <Section title="Who it is for" description="The people the claim promises the result to.">
+          <SelectField
+            label="Training status"
+            {...field('status', 'population.status')}
+            optional
+            value={draft.status}
+            onChange={(e) => set('status', e.target.value as TrainingStatus | '')}
+            options={[
+              { value: '', label: 'Not stated' },
+              ...TRAINING_STATUSES.map((s) => ({ value: s, label: TRAINING_STATUS_LABEL[s] })),
+            ]}
+          />
+          <CheckboxField
+            label="Injured athletes (rehabilitation)"
+            {...field('injured', 'population.injured')}
+            checked={draft.injured}
+            onChange={(e) => set('injured', e.target.checked)}
+          />
+          <TextField
+            label="Tags"
+            {...field('tags')}
+            optional
+            help="Comma-separated, e.g. fingers, tendon, hangboard."
+            value={draft.tags}
+            onChange={(e) => set('tags', e.target.value)}
+          />
+        </Section>
 
-      <div className="flex flex-wrap gap-2">
-        <Button type="submit" size="lg" disabled={busy} aria-busy={busy || undefined}>
-          {busy && <Spinner />}
-          {submitLabel ?? (editing ? 'Save claim and protocol' : 'Create review')}
-        </Button>
-        {onCancel && (
-          <Button variant="secondary" size="lg" onClick={onCancel} disabled={busy}>
-            Cancel
+        <div className="flex flex-wrap gap-2">
+          <Button type="submit" size="lg" disabled={busy} aria-busy={busy || undefined}>
+            {busy && <Spinner />}
+            {submitLabel ?? (editing ? 'Save claim and protocol' : 'Create review')}
           </Button>
-        )}
-      </div>
-    </form>
+          {onCancel && (
+            <Button variant="secondary" size="lg" onClick={onCancel} disabled={busy}>
+              Cancel
+            </Button>
+          )}
+        </div>
+      </form>
+      {/* Past reviews of a similar claim, whose mechanisms can be reused once this one is created. */}
+      {!editing && draft.teamId !== '' && <SimilarReviews teamId={Number(draft.teamId)} claim={draft.claim} />}
+    </>
   );
 }

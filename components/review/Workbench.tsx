@@ -22,6 +22,10 @@ import { useLibrary } from '@/lib/swr/use-library';
 import { useReviewMutations } from '@/lib/swr/use-review-mutations';
 import { useVerdict } from '@/lib/swr/use-verdict';
 import { useWorkbench } from '@/lib/swr/use-workbench';
+import { PublishPanel } from '@/components/publishing/PublishPanel';
+import { RoundStatusBadge } from '@/components/rounds/RoundStatusBadge';
+import { useReviewFrozen } from '@/components/rounds/use-rounds';
+import { SimilarReviews } from '@/components/search/SimilarReviews';
 import { ClaimForm } from './ClaimForm';
 import { Dialog } from './Dialog';
 import { DoseCheckPanel } from './DoseCheckPanel';
@@ -103,6 +107,8 @@ function LoadedWorkbench({ data, viewer }: { data: WorkbenchDTO; viewer: Viewer 
   const mutations = useReviewMutations(reviewId);
   const verdict = useVerdict(reviewId);
   const library = useLibrary(review.teamId);
+  // While a peer-review round is open the review is frozen (the server answers 409 as well).
+  const frozen = useReviewFrozen(reviewId);
   // One saver for every PATCH of this review (body autosave and claim edits share the version).
   const [saver] = useState(() => new ReviewSaver(reviewId, review.version));
   const [editor, setEditor] = useState<Editor | null>(null);
@@ -115,7 +121,8 @@ function LoadedWorkbench({ data, viewer }: { data: WorkbenchDTO; viewer: Viewer 
 
   const actor: Actor = useMemo(() => ({ userId: viewer.userId, roles: new Map(viewer.roles) }), [viewer]);
   // The same policy module the route handlers use; the server still checks every write.
-  const canEdit = decide(actor, 'review.update', { teamId: review.teamId, authorId: review.authorId }) === 'allow';
+  const canEdit =
+    !frozen && decide(actor, 'review.update', { teamId: review.teamId, authorId: review.authorId }) === 'allow';
   const canDelete = decide(actor, 'review.delete', { teamId: review.teamId, authorId: review.authorId }) === 'allow';
 
   const mechanisms = useMemo(() => [...unsorted].sort((a, b) => a.position - b.position || a.id - b.id), [unsorted]);
@@ -203,6 +210,7 @@ function LoadedWorkbench({ data, viewer }: { data: WorkbenchDTO; viewer: Viewer 
         onEdit={() => setEditingClaim(true)}
         onDelete={() => (canDelete ? setConfirmingDelete(true) : undefined)}
       />
+      <RoundStatusBadge reviewId={reviewId} />
       {notice && (
         <p
           role="status"
@@ -328,6 +336,16 @@ function LoadedWorkbench({ data, viewer }: { data: WorkbenchDTO; viewer: Viewer 
             }}
           />
         </div>
+
+        <div className="min-w-0 lg:col-start-1">
+          <PublishPanel reviewId={reviewId} />
+        </div>
+
+        {canEdit && (
+          <div className="min-w-0 lg:col-start-1">
+            <SimilarReviews teamId={review.teamId} claim={review.claim} targetReviewId={reviewId} />
+          </div>
+        )}
       </div>
 
       <Dialog

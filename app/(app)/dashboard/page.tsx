@@ -3,6 +3,10 @@ import { TeamList } from '@/components/dashboard/TeamList';
 import { PageHeader } from '@/components/layout/PageHeader';
 import { findUser } from '@/lib/auth/accounts';
 import { requirePageActor } from '@/lib/auth/current';
+import { ReviewTable } from '@/components/review/ReviewTable';
+import { decide } from '@/lib/auth/policy';
+import { listReviews } from '@/lib/reviews/queries';
+import { withBlindVerdictsHidden } from '@/lib/rounds/freeze';
 import { teamsOf } from '@/lib/teams/teams';
 
 export const metadata: Metadata = { title: 'Dashboard' };
@@ -11,6 +15,11 @@ export default async function DashboardPage() {
   const actor = await requirePageActor('/dashboard');
   const [user, teams] = await Promise.all([findUser(actor.userId), teamsOf(actor.userId)]);
   const firstName = user?.name.split(/\s+/)[0];
+  // The reviews of the first team where the person works on reviews (athletes read verdicts instead).
+  const workTeam = teams.find((t) => decide(actor, 'review.list', { teamId: t.id }) === 'allow');
+  const reviews = workTeam
+    ? await withBlindVerdictsHidden(actor.userId, await listReviews(actor, { teamId: workTeam.id }))
+    : null;
   return (
     <>
       <PageHeader
@@ -24,6 +33,18 @@ export default async function DashboardPage() {
         </h2>
         <TeamList teams={teams} />
       </section>
+      {workTeam && reviews && (
+        <section aria-labelledby="reviews-heading" className="mt-10 space-y-4">
+          <h2 id="reviews-heading" className="text-xl font-semibold">
+            Reviews in {workTeam.name}
+          </h2>
+          <ReviewTable
+            teamId={workTeam.id}
+            initial={reviews}
+            canCreate={decide(actor, 'review.create', { teamId: workTeam.id }) === 'allow'}
+          />
+        </section>
+      )}
     </>
   );
 }

@@ -8,6 +8,7 @@ import { EmptyState } from '@/components/ui/EmptyState';
 import { requirePageActor } from '@/lib/auth/current';
 import { decide } from '@/lib/auth/policy';
 import { listReviews } from '@/lib/reviews/queries';
+import { withBlindVerdictsHidden } from '@/lib/rounds/freeze';
 import { teamsOf } from '@/lib/teams/teams';
 
 export const metadata: Metadata = { title: 'Reviews' };
@@ -33,7 +34,8 @@ export default async function ReviewsPage({
     );
   }
   const canCreate = decide(actor, 'review.create', { teamId: team.id }) === 'allow';
-  const reviews = await listReviews(actor, { teamId: team.id });
+  // A reviewer still scoring a review blind does not see its verdict here either.
+  const reviews = await withBlindVerdictsHidden(actor.userId, await listReviews(actor, { teamId: team.id }));
   return (
     <>
       <PageHeader

@@ -1,11 +1,12 @@
 import type { Metadata } from 'next';
-import { notFound } from 'next/navigation';
+import { notFound, redirect } from 'next/navigation';
 import { cache } from 'react';
 import { toViewer } from '@/components/review/viewer';
 import { Workbench } from '@/components/review/Workbench';
 import { requirePageActor } from '@/lib/auth/current';
 import { decide } from '@/lib/auth/policy';
 import { getWorkbench, reviewAccess } from '@/lib/reviews/queries';
+import { blindRoundFor } from '@/lib/rounds/freeze';
 
 type Props = { params: Promise<{ id: string }> };
 
@@ -17,6 +18,9 @@ const load = cache(async (rawId: string) => {
   const access = await reviewAccess(id).catch(() => null);
   // Another team's review answers like a missing one: its existence is not confirmed.
   if (!access || decide(actor, 'review.read', access) !== 'allow') notFound();
+  // Blind scoring: an invited reviewer who has not submitted works on the scorecard, not here.
+  const blind = await blindRoundFor(actor.userId, id);
+  if (blind) redirect(`/reviews/${id}/round/${blind}`);
   return { actor, workbench: await getWorkbench(id) };
 });
 
