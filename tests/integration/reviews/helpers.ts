@@ -52,7 +52,7 @@ export async function makeTeam(tag: string): Promise<TeamFixture> {
   const members: [string, Role][] = [
     ['Cato Brill', 'coach'],
     ['Dagny Fell', 'coach'],
-    ['Emil Sorrel', 'reviewer'],
+    ['Oswin Sorrel', 'reviewer'],
     ['Fenna Lark', 'athlete'],
   ];
   const joined = [];

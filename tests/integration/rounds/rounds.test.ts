@@ -99,7 +99,7 @@ describe('opening a round', () => {
     expect(res.body.round).toMatchObject({ status: 'open', you: { manages: true, invited: false } });
     expect(res.body.round.invitations).toHaveLength(2);
 
-    for (const name of ['emil.sorrel', 'dagny.fell']) {
+    for (const name of ['oswin.sorrel', 'dagny.fell']) {
       const mail = await app
         .smtp()
         .waitFor((m) => m.to.some((to) => to.startsWith(name)) && /Peer review requested/.test(m.subject));
@@ -139,7 +139,7 @@ describe('who sees a round', () => {
   });
 
   it('a coach neither invited nor the author gets 404 for the round, its scorecard, agreement and comments', async () => {
-    const other = await reviewWithMechanisms(t, 'Only Emil reviews this');
+    const other = await reviewWithMechanisms(t, 'Only Oswin reviews this');
     const opened = await t.coach.call(roundsRoute.POST, {
       params: { id: String(other.reviewId) },
       json: { reviewerIds: [t.userIds.reviewer], dueAt: inDays(4) },
@@ -149,7 +149,7 @@ describe('who sees a round', () => {
     for (const handler of [oneRound.GET, scorecardRoute.GET, agreementRoute.GET]) {
       const res = await t.coach2.call(handler, { params });
       expect(res.status).toBe(404);
-      expect(raw(res.body)).not.toMatch(/Emil|ratings|alpha/);
+      expect(raw(res.body)).not.toMatch(/Oswin|ratings|alpha/);
     }
     expect((await t.coach2.call(commentsRoute.GET, { params: { id: String(other.reviewId) } })).status).toBe(404);
     expect((await t.coach2.call(scorecardRoute.PUT, { params, json: { ratings: [] } })).status).toBe(404);
@@ -234,7 +234,7 @@ describe('blindness at the HTTP level', () => {
     expect(submit.status).toBe(200);
     const mail = await app
       .smtp()
-      .waitFor((m) => m.to.some((to) => to.startsWith('cato.brill')) && /Emil Sorrel submitted/.test(m.subject));
+      .waitFor((m) => m.to.some((to) => to.startsWith('cato.brill')) && /Oswin Sorrel submitted/.test(m.subject));
     expect(mail.text).toContain(`http://app.test/reviews/${reviewId}/rounds`);
     expect(mail.text).toContain('2 of 2');
 
@@ -364,7 +364,7 @@ describe('settling and closing', () => {
     await assertReviewEditable(reviewId);
     const mail = await app
       .smtp()
-      .waitFor((m) => m.to.some((to) => to.startsWith('emil.sorrel')) && /Peer review closed/.test(m.subject));
+      .waitFor((m) => m.to.some((to) => to.startsWith('oswin.sorrel')) && /Peer review closed/.test(m.subject));
     expect(mail.text).toContain('approved');
     // Closed is closed.
     expect((await t.reviewer.call(commentsRoute.POST, { params: p(), json: { body: 'late' } })).status).toBe(409);
@@ -446,13 +446,13 @@ describe('the 24-hour reminder', () => {
     });
     const id = opened.body.round.id;
     // Not yet within 24 hours: nothing.
-    expect((await remindDueRounds()).reminded.filter((e) => e.startsWith('emil.sorrel'))).toEqual([]);
+    expect((await remindDueRounds()).reminded.filter((e) => e.startsWith('oswin.sorrel'))).toEqual([]);
     await ReviewRound.update({ dueAt: new Date(Date.now() + 20 * 60 * 60 * 1000) }, { where: { id } });
     const first = await remindDueRounds();
-    expect(first.reminded.filter((e) => e.startsWith('emil.sorrel'))).toHaveLength(1);
+    expect(first.reminded.filter((e) => e.startsWith('oswin.sorrel'))).toHaveLength(1);
     const mail = await app
       .smtp()
-      .waitFor((m) => m.to.some((to) => to.startsWith('emil.sorrel')) && /Due within a day/.test(m.subject));
+      .waitFor((m) => m.to.some((to) => to.startsWith('oswin.sorrel')) && /Due within a day/.test(m.subject));
     expect(mail.text).toContain(`/reviews/${fresh.reviewId}/round/${id}`);
     const second = await remindDueRounds();
     expect(second.reminded).toEqual([]);
