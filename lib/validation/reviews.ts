@@ -330,7 +330,13 @@ export const updateReviewSchema = z
     body: bodySchema.optional(),
     recommendations: recommendationsSchema.optional(),
     tags: tagsSchema.optional(),
-    status: status.optional(),
+    // Only these by hand: a round sets "in review" and "approved", publishing sets "published".
+    status: z
+      .enum(['draft', 'archived'], {
+        error:
+          'Status can be set to draft or archived here; a review round approves a review and publishing publishes it.',
+      })
+      .optional(),
   })
   .refine((value) => Object.keys(value).some((key) => key !== 'version'), {
     message: 'Nothing to change: send at least one field besides the version.',

@@ -205,9 +205,9 @@ describe('GET /api/reviews — the dashboard list', () => {
     await t.coach.call(one.PATCH, {
       method: 'PATCH',
       params: id(created.id),
-      json: { version: 1, status: 'in-review' },
+      json: { version: 1, status: 'archived' },
     });
-    const byStatus = await t.coach.call(reviews.GET, { path: '/api/reviews?status=in-review' });
+    const byStatus = await t.coach.call(reviews.GET, { path: '/api/reviews?status=archived' });
     expect(byStatus.body.reviews.map((r: { id: number }) => r.id)).toEqual([created.id]);
     const byTag = await t.coach.call(reviews.GET, { path: '/api/reviews?tag=RARE-TAG' });
     expect(byTag.body.reviews.map((r: { id: number }) => r.id)).toEqual([created.id]);
@@ -356,26 +356,23 @@ describe('PATCH /api/reviews/:id — saving with the version', () => {
     ).toBe(200);
   });
 
-  it('leaves publishing to those the policy lets publish: the authoring coach may not set "published", the owner may', async () => {
+  it('never moves a review to "in review", "approved" or "published" by hand: rounds and publishing do that', async () => {
     const created = (await create(t.coach)).body.review;
-    expect(
-      (
-        await t.coach.call(one.PATCH, {
-          method: 'PATCH',
-          params: id(created.id),
-          json: { version: 1, status: 'published' },
-        })
-      ).status,
-    ).toBe(403);
-    expect(
-      (
-        await t.owner.call(one.PATCH, {
-          method: 'PATCH',
-          params: id(created.id),
-          json: { version: 1, status: 'published' },
-        })
-      ).body.review.status,
-    ).toBe('published');
+    for (const [client, status] of [
+      [t.coach, 'in-review'],
+      [t.coach, 'approved'],
+      [t.owner, 'published'],
+    ] as const) {
+      const res = await client.call(one.PATCH, {
+        method: 'PATCH',
+        params: id(created.id),
+        json: { version: 1, status },
+      });
+      expect(res.status).toBe(400);
+      expect(res.body.issues[0].path).toBe('status');
+    }
+    const after = await t.coach.call(one.GET, { params: id(created.id) });
+    expect(after.body.review).toMatchObject({ status: 'draft', version: 1 });
   });
 });
 

@@ -20,7 +20,6 @@ export const PATCH = route(
     const access = await reviewAccess(params.id);
     authorize('review.update', access, 'That review');
     await assertReviewEditable(params.id);
-    if (body.status === 'published') authorize('review.publish', access, 'That review');
     const outcome = await updateReview(params.id, signedIn().userId, body);
     if (outcome.ok) {
       await onReviewChanged(params.id);
