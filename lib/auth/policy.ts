@@ -48,6 +48,7 @@ export const POLICY = {
   'team.members.update': roles('owner'),
   'team.members.remove': roles('owner'),
   'team.audit.read': roles('owner'),
+  'team.settings.update': roles('owner'),
   // Athletes read published verdicts, not work in progress (PRODUCT.md, "Who uses it").
   'review.list': roles(...STAFF),
   'review.read': roles(...STAFF),

@@ -14,3 +14,15 @@ export const removeMemberFormSchema = memberParams;
 
 /** `?team=<id>` on /team: which of the person's teams to show; anything else means "the first". */
 export const teamQuerySchema = z.object({ team: idParam.optional().catch(undefined) });
+
+/** A checkbox posts "on" when ticked and nothing when not. */
+const checkbox = z
+  .literal('on', { error: 'Tick the box or leave it empty.' })
+  .optional()
+  .transform((value) => value === 'on');
+
+export const teamSettingsFormSchema = z.object({
+  teamId: idParam,
+  requirePeerReview: checkbox,
+  coachesMayPublish: checkbox,
+});

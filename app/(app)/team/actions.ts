@@ -2,9 +2,16 @@
 
 import { revalidatePath } from 'next/cache';
 import { formAction } from '@/lib/auth/action';
+import { recordEvent } from '@/lib/audit/record';
+import { updateTeamSettings } from '@/lib/publishing/settings';
 import { changeRole, removeMember } from '@/lib/teams/members';
 import { inviteMember } from '@/lib/teams/invitations';
-import { inviteFormSchema, removeMemberFormSchema, roleChangeFormSchema } from '@/lib/validation/team-forms';
+import {
+  inviteFormSchema,
+  removeMemberFormSchema,
+  roleChangeFormSchema,
+  teamSettingsFormSchema,
+} from '@/lib/validation/team-forms';
 import { ROLE_INFO } from '@/components/team/roles';
 
 export const inviteAction = formAction(inviteFormSchema, async ({ teamId, email, role }, { authorize, signedIn }) => {
@@ -36,5 +43,23 @@ export const removeMemberAction = formAction(
     revalidatePath('/team');
     revalidatePath('/dashboard');
     return { ok: true, message: 'Removed from the team.' };
+  },
+);
+
+export const updateSettingsAction = formAction(
+  teamSettingsFormSchema,
+  async ({ teamId, requirePeerReview, coachesMayPublish }, { authorize, signedIn }) => {
+    authorize('team.settings.update', { teamId }, 'That team');
+    await updateTeamSettings(teamId, { requirePeerReview, coachesMayPublish });
+    await recordEvent({
+      teamId,
+      actorId: signedIn().userId,
+      action: 'team.settings_changed',
+      subjectType: 'team',
+      subjectId: teamId,
+      data: { requirePeerReview, coachesMayPublish },
+    });
+    revalidatePath('/team');
+    return { ok: true, message: 'Publishing rules saved.' };
   },
 );

@@ -1,12 +1,14 @@
 import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
 import { PageHeader } from '@/components/layout/PageHeader';
+import { PublishingSettingsForm } from '@/components/team/PublishingSettingsForm';
 import { TeamManagement } from '@/components/team/TeamManagement';
 import { TeamReadOnly } from '@/components/team/TeamReadOnly';
 import { TeamSwitcher } from '@/components/team/TeamSwitcher';
 import { EmptyState } from '@/components/ui/EmptyState';
 import { requirePageActor } from '@/lib/auth/current';
 import { decide } from '@/lib/auth/policy';
+import { teamSettings } from '@/lib/publishing/settings';
 import { listMembers } from '@/lib/teams/members';
 import { teamsOf } from '@/lib/teams/teams';
 import { teamQuerySchema } from '@/lib/validation/team-forms';
@@ -32,6 +34,8 @@ export default async function TeamPage({ searchParams }: { searchParams: Promise
   if (!team) notFound();
   const manages = decide(actor, 'team.members.list', { teamId: team.id }) === 'allow';
   const roster = manages ? await listMembers(team.id) : null;
+  const settings =
+    decide(actor, 'team.settings.update', { teamId: team.id }) === 'allow' ? await teamSettings(team.id) : null;
   return (
     <>
       <PageHeader
@@ -41,6 +45,7 @@ export default async function TeamPage({ searchParams }: { searchParams: Promise
       />
       {teams.length > 1 && <TeamSwitcher teams={teams} currentId={team.id} />}
       {roster ? <TeamManagement team={team} roster={roster} userId={actor.userId} /> : <TeamReadOnly team={team} />}
+      {settings && <PublishingSettingsForm teamId={team.id} settings={settings} />}
     </>
   );
 }

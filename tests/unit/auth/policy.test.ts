@@ -7,7 +7,13 @@ const OTHER_TEAM = 2;
 const ME = 10;
 const SOMEONE_ELSE = 11;
 
-const actorWith = (role: Role): Actor => ({ userId: ME, roles: new Map([[TEAM, role], [OTHER_TEAM + 100, 'owner']]) });
+const actorWith = (role: Role): Actor => ({
+  userId: ME,
+  roles: new Map([
+    [TEAM, role],
+    [OTHER_TEAM + 100, 'owner'],
+  ]),
+});
 
 type Row = Record<Role, Decision>;
 const A: Decision = 'allow';
@@ -26,6 +32,7 @@ const EXPECTED: Record<Action, Row> = {
   'team.members.update': { owner: A, coach: F, reviewer: F, athlete: F },
   'team.members.remove': { owner: A, coach: F, reviewer: F, athlete: F },
   'team.audit.read': { owner: A, coach: F, reviewer: F, athlete: F },
+  'team.settings.update': { owner: A, coach: F, reviewer: F, athlete: F },
   'review.list': { owner: A, coach: A, reviewer: A, athlete: F },
   'review.read': { owner: A, coach: A, reviewer: A, athlete: F },
   'review.create': { owner: A, coach: A, reviewer: F, athlete: F },
@@ -85,7 +92,9 @@ describe('policy: relations that change the answer', () => {
 
   it('agreement: an invited reviewer sees it only after submitting', () => {
     expect(decide(actorWith('reviewer'), 'review.round.agreement', { ...theirs, invited: true })).toBe('forbidden');
-    expect(decide(actorWith('reviewer'), 'review.round.agreement', { ...theirs, invited: true, submitted: true })).toBe('allow');
+    expect(decide(actorWith('reviewer'), 'review.round.agreement', { ...theirs, invited: true, submitted: true })).toBe(
+      'allow',
+    );
   });
 
   it('round comments: the author and invited reviewers take part; settling stays with the author and owner', () => {
