@@ -30,7 +30,7 @@ export function PublishingSettingsForm({
             type="checkbox"
             name="requirePeerReview"
             defaultChecked={settings.requirePeerReview}
-            className="mt-1 h-4 w-4"
+            className="accent-granite-700 mt-1 size-4 shrink-0"
           />
           <span>
             <span className="font-medium">Require a peer-review round before publishing</span>
@@ -44,7 +44,7 @@ export function PublishingSettingsForm({
             type="checkbox"
             name="coachesMayPublish"
             defaultChecked={settings.coachesMayPublish}
-            className="mt-1 h-4 w-4"
+            className="accent-granite-700 mt-1 size-4 shrink-0"
           />
           <span>
             <span className="font-medium">Let coaches publish</span>
