@@ -2,10 +2,10 @@
 
 import Link from 'next/link';
 import { useMemo, useState, type FormEvent } from 'react';
+import { FormFooter } from '@/components/review/FormFooter';
 import { Button } from '@/components/ui/Button';
 import { SelectField, TextField } from '@/components/ui/Field';
 import { FormMessage } from '@/components/ui/FormMessage';
-import { Spinner } from '@/components/ui/Spinner';
 import { StudyCombobox } from '@/components/library/StudyCombobox';
 import {
   CheckboxField,
@@ -130,7 +130,6 @@ export function AppraisalForm({
   const [errors, setErrors] = useState<Record<string, string[]>>({});
   const [message, setMessage] = useState<string | undefined>();
   const [busy, setBusy] = useState<'save' | 'delete' | null>(null);
-  const [confirmDelete, setConfirmDelete] = useState(false);
   const set = <K extends keyof Draft>(key: K, value: Draft[K]) => setDraft((d) => ({ ...d, [key]: value }));
 
   const study = useMemo(() => library.find((s) => s.id === draft.studyId), [library, draft.studyId]);
@@ -224,7 +223,6 @@ export function AppraisalForm({
     } catch (error) {
       setMessage(errorMessage(error));
       setBusy(null);
-      setConfirmDelete(false);
     }
   };
 
@@ -430,34 +428,14 @@ export function AppraisalForm({
         errors={errors.notes}
       />
 
-      <div className="border-line flex flex-wrap items-center justify-between gap-3 border-t pt-4">
-        <div className="flex flex-wrap gap-2">
-          <Button type="submit" disabled={busy !== null} aria-busy={busy === 'save' || undefined}>
-            {busy === 'save' && <Spinner />}
-            Save appraisal
-          </Button>
-          <Button variant="secondary" onClick={onCancel} disabled={busy !== null}>
-            Cancel
-          </Button>
-        </div>
-        {onDelete &&
-          (confirmDelete ? (
-            <div className="flex flex-wrap items-center gap-2" role="group" aria-label="Confirm deletion">
-              <span className="text-danger-800 text-sm">Delete this appraisal?</span>
-              <Button variant="danger" size="sm" onClick={() => void remove()} disabled={busy !== null}>
-                {busy === 'delete' && <Spinner />}
-                Yes, delete
-              </Button>
-              <Button variant="ghost" size="sm" onClick={() => setConfirmDelete(false)} disabled={busy !== null}>
-                Keep it
-              </Button>
-            </div>
-          ) : (
-            <Button variant="danger" size="sm" onClick={() => setConfirmDelete(true)} disabled={busy !== null}>
-              Delete appraisal
-            </Button>
-          ))}
-      </div>
+      <FormFooter
+        busy={busy}
+        saveLabel="Save appraisal"
+        deleteLabel="Delete appraisal"
+        deleteQuestion="Delete this appraisal?"
+        onCancel={onCancel}
+        onDelete={onDelete ? () => void remove() : undefined}
+      />
     </form>
   );
 }

@@ -1,10 +1,9 @@
 'use client';
 
 import { useState, type FormEvent } from 'react';
-import { Button } from '@/components/ui/Button';
+import { FormFooter } from './FormFooter';
 import { SelectField, TextField } from '@/components/ui/Field';
 import { FormMessage } from '@/components/ui/FormMessage';
-import { Spinner } from '@/components/ui/Spinner';
 import {
   EFFORTS,
   MAGNITUDES,
@@ -71,7 +70,6 @@ export function MechanismForm({
   const [errors, setErrors] = useState<Record<string, string[]>>({});
   const [message, setMessage] = useState<string | undefined>();
   const [busy, setBusy] = useState<'save' | 'delete' | null>(null);
-  const [confirmDelete, setConfirmDelete] = useState(false);
   const set = <K extends keyof Draft>(key: K, value: Draft[K]) => setDraft((d) => ({ ...d, [key]: value }));
 
   const priorNumber = toNumber(draft.prior);
@@ -124,7 +122,6 @@ export function MechanismForm({
     } catch (error) {
       setMessage(errorMessage(error));
       setBusy(null);
-      setConfirmDelete(false);
     }
   };
 
@@ -222,34 +219,14 @@ export function MechanismForm({
         errors={errors.stated}
       />
 
-      <div className="border-line flex flex-wrap items-center justify-between gap-3 border-t pt-4">
-        <div className="flex flex-wrap gap-2">
-          <Button type="submit" disabled={busy !== null} aria-busy={busy === 'save' || undefined}>
-            {busy === 'save' && <Spinner />}
-            Save mechanism
-          </Button>
-          <Button variant="secondary" onClick={onCancel} disabled={busy !== null}>
-            Cancel
-          </Button>
-        </div>
-        {onDelete &&
-          (confirmDelete ? (
-            <div className="flex flex-wrap items-center gap-2" role="group" aria-label="Confirm deletion">
-              <span className="text-danger-800 text-sm">Delete it and its appraisals?</span>
-              <Button variant="danger" size="sm" onClick={() => void remove()} disabled={busy !== null}>
-                {busy === 'delete' && <Spinner />}
-                Yes, delete
-              </Button>
-              <Button variant="ghost" size="sm" onClick={() => setConfirmDelete(false)} disabled={busy !== null}>
-                Keep it
-              </Button>
-            </div>
-          ) : (
-            <Button variant="danger" size="sm" onClick={() => setConfirmDelete(true)} disabled={busy !== null}>
-              Delete mechanism
-            </Button>
-          ))}
-      </div>
+      <FormFooter
+        busy={busy}
+        saveLabel="Save mechanism"
+        deleteLabel="Delete mechanism"
+        deleteQuestion="Delete it and its appraisals?"
+        onCancel={onCancel}
+        onDelete={onDelete ? () => void remove() : undefined}
+      />
     </form>
   );
 }
