@@ -1,4 +1,5 @@
 import type { Metadata } from 'next';
+import Link from 'next/link';
 import { LogoMark } from '@/components/layout/Logo';
 import { NotFoundPanel } from '@/components/layout/NotFoundPanel';
 
@@ -7,14 +8,19 @@ export const metadata: Metadata = { title: 'Not found' };
 export default function NotFound() {
   return (
     <div className="flex flex-1 flex-col justify-center">
-      {/* An unknown address renders in the root layout only, which has no header to say where you are. */}
+      {/* An unknown address, and a verdict that is missing or not this reader's (the Pages Router's 404s
+          render here too), show in the root layout only, which has no header to say where you are. */}
       <p className="max-w-measure px-gutter mx-auto w-full pt-10" aria-hidden="true">
         <LogoMark className="size-10" />
       </p>
       <NotFoundPanel title="Nothing is hanging on this hold">
         <p>
-          The page you asked for does not exist, or it belongs to a team you are not in. Check the address, or start
-          from a page you know.
+          The page you asked for does not exist, or it belongs to a team you are not in — a verdict shared only with
+          its team’s members, for instance. Check the address; if you are a member,{' '}
+          <Link className="prose-link" href="/sign-in">
+            sign in
+          </Link>{' '}
+          and open the link again.
         </p>
       </NotFoundPanel>
     </div>

@@ -97,7 +97,13 @@ async function main() {
       `<!doctype html><html><body><pre>${'x'.repeat(Math.max(0, html.length - 50))}</pre></body></html>`,
     );
 
-    const scripts = [...html.matchAll(/<script[^>]+src="([^"]+)"/g)].map((m) => m[1]);
+    // What a current browser downloads: `nomodule` scripts (Next's legacy polyfills) are skipped by
+    // every browser that runs modules, so they are not first-load JS.
+    const scripts = [...html.matchAll(/<script[^>]+>/g)]
+      .map((m) => m[0])
+      .filter((tag) => !/\snomodule/i.test(tag))
+      .map((tag) => /src="([^"]+)"/.exec(tag)?.[1])
+      .filter((src): src is string => src !== undefined);
     let raw = 0;
     let gzipped = 0;
     for (const src of new Set(scripts)) {

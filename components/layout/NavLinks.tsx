@@ -13,7 +13,8 @@ export interface NavItem {
 
 /** The app's sections; the current one is marked for screen readers as well as by colour. */
 export function NavLinks({ items, compact = false }: { items: readonly NavItem[]; compact?: boolean }) {
-  const pathname = usePathname();
+  // Null only under the Pages Router, which never renders the workbench's navigation.
+  const pathname = usePathname() ?? '';
   return (
     <ul
       className={cn(

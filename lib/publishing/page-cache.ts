@@ -1,10 +1,12 @@
+import { forgetRenderedPage } from '@/lib/cache/rendered-pages';
 import type { Publication, PublishedVersion } from '@/models';
 
 /**
- * The verdict page's data, kept in memory per slug and dropped on publish and unpublish, so a
- * page view costs no database read and a new version shows on the very next request. On
- * globalThis because Next bundles route handlers and pages separately: both must see one cache
- * (one Node process, like the sign-in throttle). Each entry is immutable data.
+ * The verdict page's data, kept in memory per slug and dropped on publish and unpublish (with
+ * the rendered public page), so a page view costs no database read and a new version shows on
+ * the very next request. On globalThis because Next bundles route handlers and pages
+ * separately: both must see one cache (one Node process, like the sign-in throttle). Each entry
+ * is immutable data.
  */
 export interface CachedPublication {
   publication: Pick<
@@ -28,6 +30,8 @@ export function rememberPublication(slug: string, value: CachedPublication): voi
   cache().set(slug, value);
 }
 
+/** After publish, unpublish or delete: the data and the rendered public page go together. */
 export function forgetPublication(slug: string): void {
   cache().delete(slug);
+  forgetRenderedPage(`/v/${slug}`);
 }

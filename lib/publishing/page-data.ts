@@ -1,22 +1,11 @@
 import { cache } from 'react';
-import { AppError } from '@/lib/api/errors';
 import { currentActor } from '@/lib/auth/current';
-import { verdictPage } from './queries';
-import type { VerdictPageDTO } from './types';
-
-const SLUG = /^[a-z0-9-]{1,100}$/;
+import { findVerdictPage } from './queries';
 
 /**
- * The verdict page's data for this request's reader (once per render: metadata and page share
- * it), or null when it does not exist or is not theirs to read — the page then answers 404.
+ * The verdict page's data for this request's reader in App Router pages (once per render:
+ * metadata and page share it), or null when it does not exist or is not theirs to read.
  */
-export const readVerdict = cache(async (slug: string, version?: number): Promise<VerdictPageDTO | null> => {
-  if (!SLUG.test(slug)) return null;
-  if (version !== undefined && !(Number.isInteger(version) && version > 0)) return null;
-  try {
-    return await verdictPage(slug, await currentActor(), version);
-  } catch (error) {
-    if (error instanceof AppError && error.status === 404) return null;
-    throw error;
-  }
-});
+export const readVerdict = cache(async (slug: string, version?: number) =>
+  findVerdictPage(slug, await currentActor(), version),
+);

@@ -1,6 +1,6 @@
 import { Op } from 'sequelize';
 import { decide, type Actor } from '@/lib/auth/policy';
-import { notFound } from '@/lib/api/errors';
+import { AppError, notFound } from '@/lib/api/errors';
 import { verdictDoc, verdictIndex, searchVerdictIndex, type VerdictDoc } from '@/lib/search/verdict-index';
 import { Publication, PublishedVersion, Team, User } from '@/models';
 import { cachedPublication, rememberPublication, type CachedPublication } from './page-cache';
@@ -65,6 +65,27 @@ export async function verdictPage(slug: string, actor: Actor | null, version?: n
     versions: versions.map((v) => summary(v, publisherNames)).reverse(),
     snapshot: shown.snapshot as unknown as VersionSnapshot,
   };
+}
+
+const SLUG = /^[a-z0-9-]{1,100}$/;
+
+/**
+ * The verdict page's data for this reader, or null when it does not exist or is not theirs to
+ * read (the page then answers 404). Takes the actor, so both routers' pages can call it.
+ */
+export async function findVerdictPage(
+  slug: string,
+  actor: Actor | null,
+  version?: number,
+): Promise<VerdictPageDTO | null> {
+  if (!SLUG.test(slug)) return null;
+  if (version !== undefined && !(Number.isInteger(version) && version > 0)) return null;
+  try {
+    return await verdictPage(slug, actor, version);
+  } catch (error) {
+    if (error instanceof AppError && error.status === 404) return null;
+    throw error;
+  }
 }
 
 /** The list line and search document of every publication (latest version). */

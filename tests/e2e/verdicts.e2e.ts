@@ -126,6 +126,20 @@ describe('publishing a verdict to a following athlete', () => {
     await hit.click();
     await athlete.waitForURL(`**/v/${slug}`);
 
+    // The cached public page follows publishing at once: 404 to a signed-out reader while the
+    // verdict is team-only, readable the moment the owner publishes it for everyone.
+    const visitorContext = await browser.newContext({ viewport: PHONE });
+    const visitor = await visitorContext.newPage();
+    expect((await visitor.goto(`/v/${slug}`))?.status()).toBe(404);
+    const republished = await owner.request.post(`/api/reviews/${reviewId}/publish`, {
+      data: { visibility: 'public', changeNote: 'Shared with everyone after a second read.' },
+    });
+    expect(republished.status()).toBe(201);
+    expect((await visitor.goto(`/v/${slug}`))?.status()).toBe(200);
+    expect(await visitor.getByText(/What changed in this version: Shared with everyone/).isVisible()).toBe(true);
+    expect(await visitor.getByRole('link', { name: 'Sign in' }).isVisible()).toBe(true);
+
+    await visitorContext.close();
     await athleteContext.close();
     await ownerContext.close();
   });
@@ -135,8 +149,14 @@ describe('what a signed-out visitor sees', () => {
   it('reads a public verdict, with its versions, and gets 404 for a team-only one', async () => {
     const context = await browser.newContext({ viewport: PHONE });
     const page = await context.newPage();
+    const scripts: string[] = [];
+    page.on('request', (r) => {
+      if (r.resourceType() === 'script') scripts.push(r.url());
+    });
     const ok = await page.goto('/v/cold-plunges-after-strength');
     expect(ok?.status()).toBe(200);
+    // Plain reading on a phone: the page loads no JavaScript at all.
+    expect(scripts).toEqual([]);
     expect(await page.getByRole('heading', { level: 1 }).textContent()).toMatch(/cold plunge/i);
     expect(await page.getByText(/Version 2, published/).isVisible()).toBe(true);
     await page.getByRole('link', { name: /All versions and what changed/ }).click();
@@ -147,7 +167,8 @@ describe('what a signed-out visitor sees', () => {
 
     const hidden = await page.goto('/v/weighted-pull-up-ladder');
     expect(hidden?.status()).toBe(404);
-    expect(await page.getByRole('heading', { name: 'This verdict was not found' }).isVisible()).toBe(true);
+    expect(await page.getByRole('heading', { level: 1 }).textContent()).toBe('Nothing is hanging on this hold');
+    expect(await page.getByText(/a verdict shared only with its team/).isVisible()).toBe(true);
     expect(await page.content()).not.toMatch(/lock-off/i);
 
     const feed = await page.request.get('/feed.xml');

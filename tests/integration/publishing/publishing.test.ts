@@ -3,7 +3,8 @@ import * as one from '@/app/api/reviews/[id]/route';
 import * as publish from '@/app/api/reviews/[id]/publish/route';
 import * as unpublish from '@/app/api/reviews/[id]/unpublish/route';
 import * as verdicts from '@/app/api/verdicts/route';
-import { verdictPage } from '@/lib/publishing/queries';
+import MemoryCacheHandler from '@/lib/cache/memory-cache-handler.mjs';
+import { findVerdictPage, verdictPage } from '@/lib/publishing/queries';
 import { updateTeamSettings } from '@/lib/publishing/settings';
 import { db } from '@/lib/db';
 import { Membership, Publication, PublishedVersion, Review } from '@/models';
@@ -244,5 +245,41 @@ describe('visibility and withdrawal', () => {
     expect(
       (await t.owner.call(unpublish.POST, { params: p(id), json: { reason: 'Withdrawing it a second time.' } })).status,
     ).toBe(409);
+  });
+});
+
+describe('the cached public page', () => {
+  it('publishing a new version, changing visibility and withdrawing each drop the rendered /v/[slug] at once', async () => {
+    const { id } = await readyReview(t.coach, t.teamId, { claim: 'Cached: daily max hangs grow finger strength.' });
+    const first = await t.owner.call(publish.POST, { params: p(id), json: { visibility: 'public' } });
+    const slug = first.body.slug as string;
+    const rendered = new MemoryCacheHandler();
+    const key = `/_rc/PAGES/0a1b/$/v/${slug}`;
+    const render = () => rendered.set(key, { kind: 'PAGES', html: '<p>v1</p>', pageData: {} });
+
+    await render();
+    const v2 = await t.owner.call(publish.POST, {
+      params: p(id),
+      json: { visibility: 'public', changeNote: 'Added the second study.' },
+    });
+    expect(v2.status).toBe(201);
+    expect(await rendered.get(key)).toBeNull();
+
+    await render();
+    await t.owner.call(publish.POST, { params: p(id), json: { visibility: 'team', changeNote: 'Team only for now.' } });
+    expect(await rendered.get(key)).toBeNull();
+    expect(await findVerdictPage(slug, null)).toBeNull();
+
+    await render();
+    await t.owner.call(unpublish.POST, { params: p(id), json: { reason: 'A study we relied on was retracted.' } });
+    expect(await rendered.get(key)).toBeNull();
+  });
+
+  it('findVerdictPage answers null (a 404) for malformed slugs and versions instead of querying', async () => {
+    expect(await findVerdictPage('Not A Slug!', null)).toBeNull();
+    expect(await findVerdictPage('x'.repeat(101), null)).toBeNull();
+    expect(await findVerdictPage('cold-plunges', null, 0)).toBeNull();
+    expect(await findVerdictPage('cold-plunges', null, 1.5)).toBeNull();
+    expect(await findVerdictPage('no-such-verdict', null)).toBeNull();
   });
 });
