@@ -46,3 +46,13 @@ export function db(): Sequelize {
   }
   return globalForDb.loadbearingDb;
 }
+
+/**
+ * Closes the connection and forgets it, so the next db() opens a fresh one. For a process that
+ * migrates and then serves (`npm start` runs Next in the same process, on the same globalThis).
+ */
+export async function closeDb(): Promise<void> {
+  const open = globalForDb.loadbearingDb;
+  globalForDb.loadbearingDb = undefined;
+  await open?.close();
+}

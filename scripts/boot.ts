@@ -27,7 +27,7 @@ export function loadLocalEnv(): void {
 }
 
 export async function migrateDatabase({ seedDemo }: { seedDemo: boolean }): Promise<void> {
-  const { db, databaseFile } = await import('../lib/db');
+  const { db, databaseFile, closeDb } = await import('../lib/db');
   const { migrate, seed } = await import('../db/migrate');
   const applied = await migrate(db());
   if (applied.length) console.log(`Migrated ${databaseFile()}: ${applied.join(', ')}`);
@@ -35,7 +35,7 @@ export async function migrateDatabase({ seedDemo }: { seedDemo: boolean }): Prom
     const seeded = await seed(db());
     if (seeded.length) console.log(`Seeded the demo team: ${seeded.join(', ')}`);
   }
-  await db().close();
+  await closeDb();
 }
 
 export async function printDemoSignIns(url: string): Promise<void> {

@@ -1,18 +1,30 @@
-import { spawn } from 'node:child_process';
-import path from 'node:path';
+import { createServer } from 'node:http';
+import { withFrontCache } from '../lib/cache/front-cache';
 import { loadLocalEnv, migrateDatabase } from './boot';
 
-// `npm start`: production server on a built app. Migrates first; never seeds demo data.
+/**
+ * `npm start`: the production server on a built app. Migrates first (never seeds demo data), then
+ * serves Next's request handler behind the verdict pages' front cache (lib/cache/front-cache.ts)
+ * in this one process. PORT (default 3000) and HOSTNAME (default all interfaces) as `next start`.
+ */
 async function main() {
   loadLocalEnv();
   await migrateDatabase({ seedDemo: false });
-  const port = process.env.PORT ?? '3000';
-  const next = spawn(process.execPath, [path.resolve('node_modules/next/dist/bin/next'), 'start', '-p', port], {
-    stdio: 'inherit',
-    env: { ...process.env, NODE_ENV: 'production', NEXT_TELEMETRY_DISABLED: '1' },
-  });
-  for (const signal of ['SIGINT', 'SIGTERM'] as const) process.on(signal, () => next.kill(signal));
-  next.on('exit', (code) => process.exit(code ?? 0));
+  const port = Number(process.env.PORT ?? 3000);
+  const hostname = process.env.HOSTNAME || undefined;
+
+  const { default: next } = await import('next');
+  const app = next({ dev: false, dir: process.cwd(), hostname: hostname ?? 'localhost', port });
+  await app.prepare();
+  const origin = `http://${hostname && hostname !== '0.0.0.0' ? hostname : '127.0.0.1'}:${port}`;
+  const server = createServer(withFrontCache(app.getRequestHandler(), () => origin));
+  server.listen(port, hostname, () => console.log(`Loadbearing (production) listening on ${origin}`));
+
+  const stop = () => {
+    server.close(() => process.exit(0));
+    server.closeAllConnections();
+  };
+  for (const signal of ['SIGINT', 'SIGTERM'] as const) process.on(signal, stop);
 }
 
 main().catch((error) => {

@@ -165,9 +165,7 @@ export async function listVerdicts(
 }
 
 /** /feed.xml: a team's public, not withdrawn verdicts (or every team's without a slug). */
-export async function publicFeed(
-  teamSlug?: string,
-): Promise<{
+export async function publicFeed(teamSlug?: string): Promise<{
   team: { name: string; slug: string } | null;
   entries: { item: VerdictListItemDTO; snapshot: VersionSnapshot }[];
 } | null> {

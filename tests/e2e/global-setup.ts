@@ -32,7 +32,7 @@ function freePort(): Promise<number> {
 async function waitUntilUp(url: string, child: ChildProcess, timeoutMs = 60_000): Promise<void> {
   const started = Date.now();
   while (Date.now() - started < timeoutMs) {
-    if (child.exitCode !== null) throw new Error(`next start exited with ${child.exitCode}`);
+    if (child.exitCode !== null) throw new Error(`the server exited with ${child.exitCode}`);
     try {
       const res = await fetch(url, { redirect: 'manual' });
       if (res.status < 500) return;
@@ -46,7 +46,7 @@ async function waitUntilUp(url: string, child: ChildProcess, timeoutMs = 60_000)
 
 /**
  * Builds the app for production (unless E2E_REUSE_BUILD=1 and a build exists), prepares a fresh
- * seeded database and a mail fake, and serves the build with `next start` on a free port.
+ * seeded database and a mail fake, and serves the build with `npm start`'s server on a free port.
  */
 export default async function setup(project: TestProject) {
   const root = process.cwd();
@@ -76,11 +76,13 @@ export default async function setup(project: TestProject) {
 
   const port = await freePort();
   const baseURL = `http://127.0.0.1:${port}`;
-  server = spawn(process.execPath, [path.join(root, 'node_modules/next/dist/bin/next'), 'start', '-p', String(port), '-H', '127.0.0.1'], {
+  // The production server of `npm start` (Next behind the verdict pages' front cache).
+  server = spawn(process.execPath, ['--import', 'tsx', path.join(root, 'scripts/start.ts')], {
     cwd: root,
     env: {
       ...env,
       PORT: String(port),
+      HOSTNAME: '127.0.0.1',
       DATABASE_URL: databaseFile,
       SESSION_SECRET: 'e2e-secret-that-is-long-enough-for-iron-session-0000',
       COOKIE_SECURE: 'false',

@@ -11,11 +11,10 @@ import type { VerdictPageDTO } from '@/lib/publishing/types';
  */
 export const config: PageConfig = { unstable_runtimeJS: false };
 
-export const getServerSideProps: GetServerSideProps<{ page: VerdictPageDTO; signedIn: boolean }, { slug: string }> = async ({
-  params,
-  req,
-  res,
-}) => {
+export const getServerSideProps: GetServerSideProps<
+  { page: VerdictPageDTO; signedIn: boolean },
+  { slug: string }
+> = async ({ params, req, res }) => {
   const actor = await actorFromRequest(req, res);
   const page = await findVerdictPage(params?.slug ?? '', actor);
   if (!page) return { notFound: true };
