@@ -7,9 +7,10 @@ export const DEFAULT_DATABASE_FILE = 'db/data/loadbearing.sqlite';
 
 /** Accepts `sqlite:path`, `file:path`, a plain path, or `:memory:`. */
 export function databaseFile(url = process.env.DATABASE_URL): string {
-  if (!url) return path.resolve(process.cwd(), DEFAULT_DATABASE_FILE);
+  // turbopackIgnore: a runtime data path, not source; without it the build traces the whole project.
+  if (!url) return path.resolve(/*turbopackIgnore: true*/ process.cwd(), DEFAULT_DATABASE_FILE);
   const stripped = url.replace(/^(sqlite|file):(\/\/)?/, '');
-  return stripped === ':memory:' ? stripped : path.resolve(process.cwd(), stripped);
+  return stripped === ':memory:' ? stripped : path.resolve(/*turbopackIgnore: true*/ process.cwd(), stripped);
 }
 
 /**

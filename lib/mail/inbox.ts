@@ -5,7 +5,8 @@ import type { ReceivedMail } from './fake-smtp';
 
 /** The mails the local fake has received, newest first (development only: /dev/mail). */
 export async function readDropInbox(dir = env().MAIL_DROP_DIR): Promise<ReceivedMail[]> {
-  const folder = path.resolve(process.cwd(), dir);
+  // turbopackIgnore: a runtime data path, not source; without it the build traces the whole project.
+  const folder = path.resolve(/*turbopackIgnore: true*/ process.cwd(), dir);
   let names: string[];
   try {
     names = (await readdir(folder)).filter((n) => n.endsWith('.json'));

@@ -17,7 +17,11 @@ const globalForStorage = globalThis as unknown as { loadbearingStorage?: { dir: 
 
 /** The storage driver for this process: the local disk under STORAGE_DIR (default db/data/uploads). */
 export function storage(): Storage {
-  const dir = path.resolve(process.cwd(), process.env.STORAGE_DIR?.trim() || DEFAULT_STORAGE_DIR);
+  // turbopackIgnore: a runtime data path, not source; without it the build traces the whole project.
+  const dir = path.resolve(
+    /*turbopackIgnore: true*/ process.cwd(),
+    process.env.STORAGE_DIR?.trim() || DEFAULT_STORAGE_DIR,
+  );
   const cached = globalForStorage.loadbearingStorage;
   if (cached && cached.dir === dir) return cached.driver;
   const driver = new LocalDiskStorage(dir);
