@@ -25,6 +25,7 @@ import type {
   CommentDTO,
   Contribution,
   InvitationDTO,
+  PendingScorecardDTO,
   RatingDTO,
   ResolutionDTO,
   ResolutionKind,
@@ -384,4 +385,32 @@ export async function reviewHeadline(
   const review = await Review.findByPk(reviewId, { attributes: ['id', 'title', 'authorId', 'teamId', 'status'] });
   if (!review) throw notFound('That review');
   return { title: review.title, authorId: review.authorId, teamId: review.teamId, status: review.status };
+}
+
+/**
+ * The scorecards this person still owes, soonest due first: open rounds they were invited to
+ * and have not submitted (for the dashboard; the round mails link to the same pages).
+ */
+export async function pendingScorecards(userId: number, now = new Date()): Promise<PendingScorecardDTO[]> {
+  const invitations = await RoundInvitation.findAll({ where: { reviewerId: userId, submittedAt: null } });
+  if (!invitations.length) return [];
+  const rounds = await ReviewRound.findAll({
+    where: { id: invitations.map((i) => i.roundId), status: 'open' },
+    order: [['dueAt', 'ASC']],
+  });
+  if (!rounds.length) return [];
+  const [reviews, drafts] = await Promise.all([
+    Review.findAll({ where: { id: rounds.map((r) => r.reviewId) }, attributes: ['id', 'title'] }),
+    Scorecard.findAll({ where: { reviewerId: userId, roundId: rounds.map((r) => r.id) }, attributes: ['roundId'] }),
+  ]);
+  const title = new Map(reviews.map((r) => [r.id, r.title]));
+  const drafted = new Set(drafts.map((d) => d.roundId));
+  return rounds.map((r) => ({
+    reviewId: r.reviewId,
+    roundId: r.id,
+    title: title.get(r.reviewId) ?? 'Untitled review',
+    dueAt: r.dueAt.toISOString(),
+    overdue: r.dueAt.getTime() < now.getTime(),
+    draftSaved: drafted.has(r.id),
+  }));
 }

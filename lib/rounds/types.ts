@@ -237,3 +237,13 @@ export const RESOLUTION_LABEL: Record<ResolutionKind, string> = {
   'change-magnitude': 'Change the magnitude',
   keep: 'Keep as it is',
 };
+
+/** A scorecard this person still owes: an open round they were invited to and have not submitted. */
+export interface PendingScorecardDTO {
+  reviewId: number;
+  roundId: number;
+  title: string;
+  dueAt: string;
+  overdue: boolean;
+  draftSaved: boolean;
+}

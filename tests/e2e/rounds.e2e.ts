@@ -196,6 +196,11 @@ describe('the seeded open round', () => {
     await page.goto('/sign-in');
     await signInAs(page, 'reviewer@granite-hollow.test', 'loadbearing-demo');
     await page.waitForURL('**/dashboard');
+    // Her dashboard leads to the scorecard she still owes, without the invitation mail.
+    const waiting = page.getByRole('region', { name: 'Scorecards waiting for you' });
+    await expect.poll(() => waiting.getByText('Draft saved: finish and submit').isVisible()).toBe(true);
+    await waiting.getByRole('link').first().click();
+    await page.waitForURL('**/reviews/*/round/*');
     const list = await page.request.get('/api/reviews');
     const pinch = ((await list.json()).reviews as { id: number; slug: string }[]).find(
       (r) => r.slug === 'light-daily-pinch-block-lifts',

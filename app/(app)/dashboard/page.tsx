@@ -1,4 +1,5 @@
 import type { Metadata } from 'next';
+import { PendingScorecards } from '@/components/dashboard/PendingScorecards';
 import { TeamList } from '@/components/dashboard/TeamList';
 import { PageHeader } from '@/components/layout/PageHeader';
 import { findUser } from '@/lib/auth/accounts';
@@ -7,13 +8,18 @@ import { ReviewTable } from '@/components/review/ReviewTable';
 import { decide } from '@/lib/auth/policy';
 import { listReviews } from '@/lib/reviews/queries';
 import { withBlindVerdictsHidden } from '@/lib/rounds/freeze';
+import { pendingScorecards } from '@/lib/rounds/queries';
 import { teamsOf } from '@/lib/teams/teams';
 
 export const metadata: Metadata = { title: 'Dashboard' };
 
 export default async function DashboardPage() {
   const actor = await requirePageActor('/dashboard');
-  const [user, teams] = await Promise.all([findUser(actor.userId), teamsOf(actor.userId)]);
+  const [user, teams, scorecards] = await Promise.all([
+    findUser(actor.userId),
+    teamsOf(actor.userId),
+    pendingScorecards(actor.userId),
+  ]);
   const firstName = user?.name.split(/\s+/)[0];
   // The reviews of the first team where the person works on reviews (athletes read verdicts instead).
   const workTeam = teams.find((t) => decide(actor, 'review.list', { teamId: t.id }) === 'allow');
@@ -27,6 +33,7 @@ export default async function DashboardPage() {
         title="Dashboard"
         description="Your teams and your role in each. Claims, reviews and verdicts live inside a team."
       />
+      <PendingScorecards items={scorecards} />
       <section aria-labelledby="teams-heading" className="space-y-4">
         <h2 id="teams-heading" className="text-xl font-semibold">
           Your teams
