@@ -26,8 +26,8 @@ export function NavLinks({ items, compact = false }: { items: readonly NavItem[]
         const current = pathname === item.href || pathname.startsWith(`${item.href}/`);
         const box = cn(
           'relative inline-flex min-h-11 items-center rounded-md font-semibold transition-colors',
-          // Phones: all five sections fit a 375px row without scrolling.
-          compact ? 'px-2 text-[0.8125rem]' : 'px-3 text-sm',
+          // Phones: all six sections fit a 375px row without scrolling (labels 296px of 351px).
+          compact ? 'px-1 text-[0.8125rem] after:inset-x-1' : 'px-3 text-sm after:inset-x-2',
         );
         return (
           <li key={item.href} className="shrink-0">
@@ -43,8 +43,7 @@ export function NavLinks({ items, compact = false }: { items: readonly NavItem[]
                 className={cn(
                   box,
                   current ? 'text-brand' : 'text-ink-muted hover:bg-paper-sunken hover:text-ink',
-                  current &&
-                    'after:bg-rope-500 after:absolute after:inset-x-2 after:-bottom-px after:h-0.5 after:rounded-full',
+                  current && 'after:bg-rope-500 after:absolute after:-bottom-px after:h-0.5 after:rounded-full',
                 )}
               >
                 {item.label}

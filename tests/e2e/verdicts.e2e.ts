@@ -48,6 +48,9 @@ describe('publishing a verdict to a following athlete', () => {
     const athlete = await athleteContext.newPage();
     await signIn(athlete, ATHLETE);
     await athlete.goto('/verdicts');
+    // Every section of the app's navigation fits the phone's row: none hides off-screen.
+    const nav = athlete.getByRole('navigation', { name: 'Main' }).locator('ul').last();
+    expect(await nav.evaluate((ul) => ul.scrollWidth - ul.clientWidth)).toBeLessThanOrEqual(0);
     await athlete.getByRole('button', { name: /Follow Granite Hollow Training Lab/ }).click();
     await expect.poll(() => athlete.getByText(/You will get an e-mail when Granite Hollow/).isVisible()).toBe(true);
 
