@@ -61,21 +61,40 @@ export function tokens(text: string): { term: string; start: number; end: number
 }
 
 /**
- * The entries with the highest values first. A full sort of every scored document costs more
- * than the scoring at 10,000 documents, so the best `want` are picked first and sorted; the
- * rest follow (sorted) only if the caller's filter drops enough of those.
+ * The `want` highest-scoring documents among `touched`, best first (ties: indexed first). A full
+ * sort of every scored document costs more than the scoring at tens of thousands of documents,
+ * so a small min-heap keeps the best `want` in one pass.
  */
-function* topFirst(scores: Map<string, number>, want: number): Generator<[string, number]> {
-  const entries = [...scores];
-  if (entries.length <= want * 4) {
-    yield* entries.sort((a, b) => b[1] - a[1]);
-    return;
+function topOrdinals(touched: number[], scores: Float64Array, want: number): number[] {
+  const better = (a: number, b: number) => scores[a] > scores[b] || (scores[a] === scores[b] && a < b);
+  const heap: number[] = []; // heap[0] is the worst of the best kept so far
+  const down = (i: number) => {
+    for (;;) {
+      const l = 2 * i + 1;
+      const r = l + 1;
+      let worst = i;
+      if (l < heap.length && better(heap[worst], heap[l])) worst = l;
+      if (r < heap.length && better(heap[worst], heap[r])) worst = r;
+      if (worst === i) return;
+      [heap[i], heap[worst]] = [heap[worst], heap[i]];
+      i = worst;
+    }
+  };
+  for (const ord of touched) {
+    if (heap.length < want) {
+      heap.push(ord);
+      for (let i = heap.length - 1; i > 0;) {
+        const parent = (i - 1) >> 1;
+        if (!better(heap[parent], heap[i])) break;
+        [heap[i], heap[parent]] = [heap[parent], heap[i]];
+        i = parent;
+      }
+    } else if (better(ord, heap[0])) {
+      heap[0] = ord;
+      down(0);
+    }
   }
-  const values = entries.map((e) => e[1]).sort((a, b) => b - a);
-  const cut = values[want - 1];
-  const head = entries.filter((e) => e[1] >= cut).sort((a, b) => b[1] - a[1]);
-  yield* head;
-  yield* entries.filter((e) => e[1] < cut).sort((a, b) => b[1] - a[1]);
+  return heap.sort((a, b) => (better(a, b) ? -1 : 1));
 }
 
 const MATCH_OPTIONS = { threshold: 0.34, ignoreLocation: true, includeScore: true } as const;
@@ -101,13 +120,24 @@ const STOP = new Set([
 ]);
 
 export class FuzzyIndex<T> {
-  private docs = new Map<string, T>();
-  /** term → docKey → bitmask of the fields it occurs in. */
-  private postings = new Map<string, Map<string, number>>();
-  /** docKey → its terms (for removal). */
-  private termsOf = new Map<string, Set<string>>();
+  /**
+   * Documents are numbered (ordinals, reused after removal) so a query adds up scores in typed
+   * arrays instead of maps keyed by strings: at 40,000 documents that is most of a query's time.
+   */
+  private ordinals = new Map<string, number>();
+  private byOrdinal: (T | undefined)[] = [];
+  private freeOrdinals: number[] = [];
+  /** term → ordinal → bitmask of the fields it occurs in. */
+  private postings = new Map<string, Map<number, number>>();
+  /** ordinal → its terms (for removal and highlighting). */
+  private termsOf = new Map<number, Set<string>>();
   /** Letter pair → the vocabulary words that contain it (the candidates for a fuzzy word). */
   private grams = new Map<string, Set<string>>();
+  /** Per-query scratch, one slot per ordinal; every slot used is reset before search returns. */
+  private total = new Float64Array(0);
+  private perWord = new Float64Array(0);
+  private seen = new Uint8Array(0);
+  private seenForWord = new Uint8Array(0);
 
   constructor(
     private readonly fields: FieldSpec<T>[],
@@ -120,7 +150,7 @@ export class FuzzyIndex<T> {
   }
 
   get size(): number {
-    return this.docs.size;
+    return this.ordinals.size;
   }
 
   private fieldValues(doc: T, f: FieldSpec<T>): string[] {
@@ -129,8 +159,9 @@ export class FuzzyIndex<T> {
   }
 
   private index(doc: T, fresh: Set<string>) {
-    const key = this.keyOf(doc);
-    this.docs.set(key, doc);
+    const ord = this.freeOrdinals.pop() ?? this.byOrdinal.length;
+    this.ordinals.set(this.keyOf(doc), ord);
+    this.byOrdinal[ord] = doc;
     const terms = new Set<string>();
     this.fields.forEach((f, i) => {
       for (const value of this.fieldValues(doc, f)) {
@@ -142,12 +173,12 @@ export class FuzzyIndex<T> {
             this.postings.set(term, posting);
             fresh.add(term);
           }
-          posting.set(key, (posting.get(key) ?? 0) | (1 << i));
+          posting.set(ord, (posting.get(ord) ?? 0) | (1 << i));
           terms.add(term);
         }
       }
     });
-    this.termsOf.set(key, terms);
+    this.termsOf.set(ord, terms);
   }
 
   /** Adds the document, or replaces the one with the same key. */
@@ -159,25 +190,27 @@ export class FuzzyIndex<T> {
   }
 
   remove(key: string): boolean {
-    const terms = this.termsOf.get(key);
-    if (!terms) return false;
+    const ord = this.ordinals.get(key);
+    if (ord === undefined) return false;
     const gone = new Set<string>();
-    for (const term of terms) {
+    for (const term of this.termsOf.get(ord) ?? []) {
       const posting = this.postings.get(term);
-      posting?.delete(key);
+      posting?.delete(ord);
       if (posting && posting.size === 0) {
         this.postings.delete(term);
         gone.add(term);
       }
     }
     for (const term of gone) this.removeGrams(term);
-    this.termsOf.delete(key);
-    this.docs.delete(key);
+    this.termsOf.delete(ord);
+    this.ordinals.delete(key);
+    this.byOrdinal[ord] = undefined;
+    this.freeOrdinals.push(ord);
     return true;
   }
 
   removeWhere(predicate: (doc: T) => boolean): T[] {
-    const removed = [...this.docs.values()].filter(predicate);
+    const removed = [...this.ordinals.values()].map((ord) => this.byOrdinal[ord]!).filter(predicate);
     for (const doc of removed) this.remove(this.keyOf(doc));
     return removed;
   }
@@ -245,54 +278,103 @@ export class FuzzyIndex<T> {
   search(query: string, opts: { filter?: (doc: T) => boolean; limit?: number } = {}): EngineHit<T>[] {
     const words = [...new Set(tokens(query).map((t) => t.term))].filter((w) => !STOP.has(w));
     if (!words.length) return [];
-    const n = this.docs.size || 1;
+    this.growScratch();
+    const { total, perWord, seen, seenForWord } = this;
+    const n = this.ordinals.size || 1;
     const maxWeight = Math.max(...this.fields.map((f) => f.weight));
-    const scores = new Map<string, number>();
+    const touched: number[] = [];
     const allTerms = new Set<string>();
     let best = 0;
-    for (const word of words) {
-      const expanded = this.expand(word);
-      let bestIdf = 0;
-      if (expanded.size === 1) {
-        // The common case (one exact or one close word): add straight into the totals.
-        const [[term, closeness]] = expanded;
-        allTerms.add(term);
-        const posting = this.postings.get(term)!;
-        const idf = Math.log(1 + n / posting.size);
-        bestIdf = idf;
-        const factor = closeness * closeness * idf;
-        for (const [key, mask] of posting) scores.set(key, (scores.get(key) ?? 0) + this.weightOf(mask) * factor);
-      } else {
-        // Several vocabulary words match this query word: a document counts its best one only.
-        const perDoc = new Map<string, number>();
-        for (const [term, closeness] of expanded) {
+    const add = (ord: number, s: number) => {
+      if (!seen[ord]) {
+        seen[ord] = 1;
+        touched.push(ord);
+      }
+      total[ord] += s;
+    };
+    try {
+      for (const word of words) {
+        const expanded = this.expand(word);
+        let bestIdf = 0;
+        if (expanded.size === 1) {
+          // The common case (one exact or one close word): add straight into the totals.
+          const [[term, closeness]] = expanded;
           allTerms.add(term);
           const posting = this.postings.get(term)!;
           const idf = Math.log(1 + n / posting.size);
-          bestIdf = Math.max(bestIdf, idf);
+          bestIdf = idf;
           const factor = closeness * closeness * idf;
-          for (const [key, mask] of posting) {
-            const s = this.weightOf(mask) * factor;
-            const had = perDoc.get(key);
-            if (had === undefined || s > had) perDoc.set(key, s);
+          for (const [ord, mask] of posting) add(ord, this.weightOf(mask) * factor);
+        } else {
+          // Several vocabulary words match this query word: a document counts its best one only.
+          const wordTouched: number[] = [];
+          for (const [term, closeness] of expanded) {
+            allTerms.add(term);
+            const posting = this.postings.get(term)!;
+            const idf = Math.log(1 + n / posting.size);
+            bestIdf = Math.max(bestIdf, idf);
+            const factor = closeness * closeness * idf;
+            for (const [ord, mask] of posting) {
+              const s = this.weightOf(mask) * factor;
+              if (!seenForWord[ord]) {
+                seenForWord[ord] = 1;
+                wordTouched.push(ord);
+                perWord[ord] = s;
+              } else if (s > perWord[ord]) perWord[ord] = s;
+            }
+          }
+          for (const ord of wordTouched) {
+            add(ord, perWord[ord]);
+            perWord[ord] = 0;
+            seenForWord[ord] = 0;
           }
         }
-        for (const [key, s] of perDoc) scores.set(key, (scores.get(key) ?? 0) + s);
+        best += maxWeight * (bestIdf || Math.log(1 + n));
       }
-      best += maxWeight * (bestIdf || Math.log(1 + n));
+      const limit = opts.limit ?? 30;
+      const out: EngineHit<T>[] = [];
+      const collect = (ords: number[]) => {
+        for (const ord of ords) {
+          const doc = this.byOrdinal[ord]!;
+          if (opts.filter && !opts.filter(doc)) continue;
+          // Matched words are worked out only for the results returned, not for every scored document.
+          const mine = this.termsOf.get(ord)!;
+          const terms = new Set([...allTerms].filter((t) => mine.has(t)));
+          out.push({ doc, score: Math.max(0, 1 - total[ord] / best), matches: this.ranges(doc, terms) });
+          if (out.length >= limit) return;
+        }
+      };
+      const head = topOrdinals(touched, total, opts.filter ? limit * 4 : limit);
+      collect(head);
+      if (out.length < limit && head.length < touched.length) {
+        // The filter dropped too many of the best: go on through the rest, best first.
+        const taken = new Set(head);
+        collect(
+          topOrdinals(
+            touched.filter((o) => !taken.has(o)),
+            total,
+            touched.length,
+          ),
+        );
+      }
+      return out;
+    } finally {
+      for (const ord of touched) {
+        total[ord] = 0;
+        seen[ord] = 0;
+      }
     }
-    const limit = opts.limit ?? 30;
-    const out: EngineHit<T>[] = [];
-    for (const [key, total] of topFirst(scores, opts.filter ? limit * 4 : limit)) {
-      const doc = this.docs.get(key)!;
-      if (opts.filter && !opts.filter(doc)) continue;
-      // Matched words are worked out only for the results returned, not for every scored document.
-      const mine = this.termsOf.get(key)!;
-      const terms = new Set([...allTerms].filter((t) => mine.has(t)));
-      out.push({ doc, score: Math.max(0, 1 - total / best), matches: this.ranges(doc, terms) });
-      if (out.length >= limit) break;
-    }
-    return out;
+  }
+
+  /** Scratch arrays as long as the highest ordinal (they grow with the index, never shrink). */
+  private growScratch() {
+    const need = this.byOrdinal.length;
+    if (this.total.length >= need) return;
+    const size = Math.ceil(need * 1.25) + 64;
+    this.total = new Float64Array(size);
+    this.perWord = new Float64Array(size);
+    this.seen = new Uint8Array(size);
+    this.seenForWord = new Uint8Array(size);
   }
 
   /** Where the matched words occur in each field's text, as fuse.js reports matches. */
