@@ -20,8 +20,14 @@ const SESSION = new RegExp(`(?:^|;\\s*)${SESSION_COOKIE}=`);
 /** Sent by the loopback fill so it is rendered by Next, not answered from (or refilled into) this cache. */
 export const FILL_HEADER = 'x-loadbearing-fill';
 const MAX_ENTRIES = 1000;
+/**
+ * The same safety net as the page's own refresh (pages/v/[slug]/index.tsx): publishing drops a
+ * page at once; a change nobody announced (a publisher's new name) shows within five minutes.
+ */
+export const MAX_AGE_MS = 300_000;
 
 interface Entry {
+  storedAt: number;
   body: Buffer;
   gzipped: Buffer;
   headers: Record<string, string>;
@@ -91,7 +97,7 @@ export async function fill(path: string, origin: string): Promise<void> {
       if (value) headers[name] = value;
     }
     if (store.entries.size >= MAX_ENTRIES) store.entries.delete(store.entries.keys().next().value!);
-    store.entries.set(path, { body, gzipped: gzipSync(body), headers });
+    store.entries.set(path, { storedAt: Date.now(), body, gzipped: gzipSync(body), headers });
   } catch (error) {
     // Only the cache suffers: the next request is rendered by Next and tries again.
     console.warn(`front cache: could not fill ${path}:`, error instanceof Error ? error.message : error);
@@ -115,12 +121,13 @@ export function forgetFrontCached(path: string): void {
 export function withFrontCache(
   handle: (req: IncomingMessage, res: ServerResponse) => unknown,
   origin: () => string,
+  { maxAgeMs = MAX_AGE_MS } = {},
 ): RequestListener {
   return (req, res) => {
     const path = cacheablePath(req);
     if (path) {
       const entry = frontCacheStore().entries.get(path);
-      if (entry) return send(req, res, entry);
+      if (entry && Date.now() - entry.storedAt < maxAgeMs) return send(req, res, entry);
       void fill(path, origin());
     }
     return handle(req, res);

@@ -6,7 +6,8 @@ import type { VerdictPageDTO } from '@/lib/publishing/types';
 /**
  * /v/[slug] for everyone who is not signed in: the latest version of a public verdict, rendered
  * once and then served from the page cache until the next publish, unpublish or delete drops it
- * (lib/publishing/page-cache.ts). Team-only and unknown slugs are 404 here. Signed-in readers
+ * (lib/publishing/page-cache.ts); under `npm start` the front cache (lib/cache/front-cache.ts)
+ * answers before Next is asked at all. Team-only and unknown slugs are 404 here. Signed-in readers
  * never reach this page: proxy.ts sends them to ./signed-in, which checks membership.
  *
  * Why the Pages Router: athletes read this on phones, and the page is plain reading. Here Next

@@ -127,4 +127,29 @@ describe('the front cache of the verdict pages', () => {
     expect(frontCacheStore().entries.has('/v/racing')).toBe(false);
     await new Promise<void>((resolve) => slowServer.close(() => resolve()));
   });
+
+  it('an entry older than its maximum age goes back to Next and is filled again', async () => {
+    let answers = 0;
+    let shortOrigin = '';
+    const short: Server = createServer(
+      withFrontCache(
+        (_req, res) => {
+          answers++;
+          res.writeHead(200, { 'content-type': 'text/html' }).end(`<p>answer ${answers}</p>`);
+        },
+        () => shortOrigin,
+        { maxAgeMs: 200 },
+      ),
+    );
+    await new Promise<void>((resolve) => short.listen(0, '127.0.0.1', resolve));
+    shortOrigin = `http://127.0.0.1:${(short.address() as AddressInfo).port}`;
+    await fetch(shortOrigin + '/v/aging');
+    await cached('/v/aging');
+    const fresh = await fetch(shortOrigin + '/v/aging');
+    expect(fresh.headers.get('x-loadbearing-cache')).toBe('hit');
+    await new Promise((r) => setTimeout(r, 250));
+    const aged = await fetch(shortOrigin + '/v/aging');
+    expect(aged.headers.get('x-loadbearing-cache')).toBeNull();
+    await new Promise<void>((resolve) => short.close(() => resolve()));
+  });
 });
