@@ -4,16 +4,10 @@ import Link from 'next/link';
 import { useMemo, useState, type FormEvent } from 'react';
 import { FormFooter } from '@/components/review/FormFooter';
 import { Button } from '@/components/ui/Button';
-import { SelectField, TextField } from '@/components/ui/Field';
+import { CheckboxField, RadioGroupField, SelectField, TextAreaField, TextField } from '@/components/ui/Field';
 import { FormMessage } from '@/components/ui/FormMessage';
 import { StudyCombobox } from '@/components/library/StudyCombobox';
-import {
-  CheckboxField,
-  focusFirstInvalid,
-  issuesToErrors,
-  RadioGroupField,
-  TextAreaField,
-} from '@/components/review/fields';
+import { focusFirstInvalid, issuesToErrors } from '@/components/ui/form-errors';
 import {
   CONCERN_LABEL,
   DESIGN_LABEL,

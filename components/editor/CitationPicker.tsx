@@ -1,7 +1,7 @@
 'use client';
 
 import Link from 'next/link';
-import { Dialog } from '@/components/review/Dialog';
+import { Dialog } from '@/components/ui/Dialog';
 import { StudyCombobox } from '@/components/library/StudyCombobox';
 import type { StudyDTO } from '@/lib/reviews/types';
 

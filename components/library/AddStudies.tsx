@@ -6,7 +6,7 @@ import { useSWRConfig } from 'swr';
 import { Button } from '@/components/ui/Button';
 import { cn } from '@/components/ui/cn';
 import { Spinner } from '@/components/ui/Spinner';
-import { TextAreaField } from '@/components/review/fields';
+import { TextAreaField } from '@/components/ui/Field';
 import type { ImportResultDTO } from '@/lib/reviews/types';
 import { apiStream, errorMessage } from '@/lib/swr/fetcher';
 import { isStudiesKey } from '@/lib/swr/keys';

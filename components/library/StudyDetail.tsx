@@ -9,7 +9,7 @@ import { Button, buttonClasses } from '@/components/ui/Button';
 import { Card, CardBody, CardHeader } from '@/components/ui/Card';
 import { Skeleton } from '@/components/ui/Skeleton';
 import { Spinner } from '@/components/ui/Spinner';
-import { Dialog } from '@/components/review/Dialog';
+import { Dialog } from '@/components/ui/Dialog';
 import {
   CERTAINTY_LABEL,
   DESIGN_LABEL,

@@ -2,10 +2,10 @@
 
 import { useState, type FormEvent } from 'react';
 import { Button } from '@/components/ui/Button';
-import { SelectField, TextField } from '@/components/ui/Field';
+import { CheckboxField, SelectField, TextField } from '@/components/ui/Field';
 import { FormMessage } from '@/components/ui/FormMessage';
 import { Spinner } from '@/components/ui/Spinner';
-import { CheckboxField, focusFirstInvalid, issuesToErrors } from '@/components/review/fields';
+import { focusFirstInvalid, issuesToErrors } from '@/components/ui/form-errors';
 import { DESIGN_LABEL, TRAINING_STATUS_LABEL } from '@/components/review/labels';
 import { STUDY_DESIGNS, TRAINING_STATUSES, type EffectDataDTO, type StudyDTO } from '@/lib/reviews/types';
 import { ApiError, apiFetch, errorMessage } from '@/lib/swr/fetcher';

@@ -5,7 +5,7 @@ import { SimilarReviews } from '@/components/search/SimilarReviews';
 import { useId, useState, type FormEvent, type ReactNode } from 'react';
 import { useSWRConfig } from 'swr';
 import { Button } from '@/components/ui/Button';
-import { SelectField, TextField } from '@/components/ui/Field';
+import { CheckboxField, SelectField, TextAreaField, TextField } from '@/components/ui/Field';
 import { FormMessage } from '@/components/ui/FormMessage';
 import { Spinner } from '@/components/ui/Spinner';
 import { convertLoad } from '@/lib/reviews/protocol';
@@ -21,7 +21,7 @@ import {
 import { ApiError, apiFetch, errorMessage } from '@/lib/swr/fetcher';
 import { isReviewListKey } from '@/lib/swr/keys';
 import { createReviewSchema, updateReviewSchema } from '@/lib/validation/reviews';
-import { CheckboxField, focusFirstInvalid, issuesToErrors, TextAreaField } from './fields';
+import { focusFirstInvalid, issuesToErrors } from '@/components/ui/form-errors';
 import { EFFORT_LABEL, LOAD_UNIT_HELP, LOAD_UNIT_LABEL, percent, TRAINING_STATUS_LABEL } from './labels';
 
 const BODYWEIGHT_UNITS: readonly LoadUnit[] = ['percent-bodyweight', 'kg-added'];

@@ -2,7 +2,7 @@
 
 import { useState, type FormEvent } from 'react';
 import { FormFooter } from './FormFooter';
-import { SelectField, TextField } from '@/components/ui/Field';
+import { CheckboxField, SelectField, TextAreaField, TextField } from '@/components/ui/Field';
 import { FormMessage } from '@/components/ui/FormMessage';
 import {
   EFFORTS,
@@ -18,7 +18,7 @@ import { likelihoodTerm } from '@/lib/scoring/likelihood';
 import { errorMessage, ApiError } from '@/lib/swr/fetcher';
 import type { MechanismInput } from '@/lib/swr/use-review-mutations';
 import { mechanismSchema } from '@/lib/validation/reviews';
-import { CheckboxField, focusFirstInvalid, issuesToErrors, TextAreaField } from './fields';
+import { focusFirstInvalid, issuesToErrors } from '@/components/ui/form-errors';
 import { EFFORT_LABEL, MAGNITUDE_LABEL, MECHANISM_KIND_HELP, MECHANISM_KIND_LABEL, percent } from './labels';
 
 interface Draft {

@@ -8,7 +8,8 @@ import { Spinner } from '@/components/ui/Spinner';
 import type { RecommendationsDTO, ReviewDTO } from '@/lib/reviews/types';
 import { ApiError, errorMessage } from '@/lib/swr/fetcher';
 import { recommendationsSchema } from '@/lib/validation/reviews';
-import { focusFirstInvalid, issuesToErrors, TextAreaField } from './fields';
+import { TextAreaField } from '@/components/ui/Field';
+import { focusFirstInvalid, issuesToErrors } from '@/components/ui/form-errors';
 
 const FIELDS: { key: keyof RecommendationsDTO; label: string; help: string }[] = [
   {

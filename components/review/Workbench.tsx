@@ -27,7 +27,7 @@ import { RoundStatusBadge } from '@/components/rounds/RoundStatusBadge';
 import { useReviewFrozen } from '@/components/rounds/use-rounds';
 import { SimilarReviews } from '@/components/search/SimilarReviews';
 import { ClaimForm } from './ClaimForm';
-import { Dialog } from './Dialog';
+import { Dialog } from '@/components/ui/Dialog';
 import { DoseCheckPanel } from './DoseCheckPanel';
 import { MECHANISM_KIND_LABEL, percent } from './labels';
 import { MechanismForm } from './MechanismForm';

@@ -35,6 +35,23 @@ function useFieldIds(errors?: string[], help?: ReactNode) {
   return { id, helpId, errorId, invalid, describedBy };
 }
 
+/** Always rendered, so the live region exists before the first error arrives. */
+function FieldErrors({ id, errors }: { id: string; errors?: string[] }) {
+  return (
+    <div id={id} aria-live="polite" aria-atomic="true">
+      {errors?.map((message) => (
+        <p key={message} className="text-danger-700 flex items-start gap-1.5 text-sm font-medium">
+          <svg viewBox="0 0 16 16" className="mt-0.5 size-4 shrink-0" aria-hidden="true">
+            <circle cx="8" cy="8" r="7" fill="currentColor" />
+            <path d="M8 4.5v4.2M8 11.2v.3" stroke="white" strokeWidth="1.7" strokeLinecap="round" />
+          </svg>
+          {message}
+        </p>
+      ))}
+    </div>
+  );
+}
+
 function Frame({
   id,
   helpId,
@@ -57,18 +74,7 @@ function Frame({
         </p>
       )}
       {children}
-      {/* Always rendered so the live region exists before the first error arrives. */}
-      <div id={errorId} aria-live="polite" aria-atomic="true">
-        {errors?.map((message) => (
-          <p key={message} className="text-danger-700 flex items-start gap-1.5 text-sm font-medium">
-            <svg viewBox="0 0 16 16" className="mt-0.5 size-4 shrink-0" aria-hidden="true">
-              <circle cx="8" cy="8" r="7" fill="currentColor" />
-              <path d="M8 4.5v4.2M8 11.2v.3" stroke="white" strokeWidth="1.7" strokeLinecap="round" />
-            </svg>
-            {message}
-          </p>
-        ))}
-      </div>
+      <FieldErrors id={errorId} errors={errors} />
     </div>
   );
 }
@@ -140,5 +146,119 @@ export function SelectField({
         </svg>
       </div>
     </Frame>
+  );
+}
+
+export type TextAreaFieldProps = FieldFrame & Omit<ComponentProps<'textarea'>, 'id'>;
+
+export function TextAreaField({ label, help, errors, optional, className, ...textarea }: TextAreaFieldProps) {
+  const { id, helpId, errorId, invalid, describedBy } = useFieldIds(errors, help);
+  return (
+    <Frame {...{ id, helpId, errorId, label, help, errors, optional }}>
+      <textarea
+        id={id}
+        className={controlClasses(invalid, cn('min-h-24', className))}
+        aria-invalid={invalid || undefined}
+        aria-describedby={describedBy}
+        {...textarea}
+      />
+    </Frame>
+  );
+}
+
+export function CheckboxField({
+  label,
+  help,
+  errors,
+  className,
+  ...input
+}: {
+  label: ReactNode;
+  help?: ReactNode;
+  errors?: string[];
+} & Omit<ComponentProps<'input'>, 'id' | 'type'>) {
+  const { id, helpId, errorId, invalid, describedBy } = useFieldIds(errors, help);
+  return (
+    <div className={cn('space-y-1', className)}>
+      <div className="flex items-start gap-3">
+        <input
+          id={id}
+          type="checkbox"
+          aria-invalid={invalid || undefined}
+          aria-describedby={describedBy}
+          className="border-line-strong accent-granite-700 mt-0.5 size-5 shrink-0 rounded"
+          {...input}
+        />
+        <div className="space-y-0.5">
+          <label htmlFor={id} className="text-ink block text-sm font-semibold">
+            {label}
+          </label>
+          {help && (
+            <p id={helpId} className="text-ink-muted text-sm">
+              {help}
+            </p>
+          )}
+        </div>
+      </div>
+      <FieldErrors id={errorId} errors={errors} />
+    </div>
+  );
+}
+
+/** A set of radio buttons with a visible legend; the options sit side by side and wrap on a phone. */
+export function RadioGroupField<V extends string>({
+  legend,
+  help,
+  name,
+  value,
+  options,
+  onChange,
+  errors,
+}: {
+  legend: ReactNode;
+  help?: ReactNode;
+  name: string;
+  value: V;
+  options: ReadonlyArray<{ value: V; label: ReactNode; hint?: ReactNode }>;
+  onChange: (value: V) => void;
+  errors?: string[];
+}) {
+  const id = useId();
+  return (
+    <fieldset className="space-y-1.5" aria-describedby={help ? `${id}-help` : undefined}>
+      <legend className="text-ink text-sm font-semibold">{legend}</legend>
+      {help && (
+        <p id={`${id}-help`} className="text-ink-muted text-sm">
+          {help}
+        </p>
+      )}
+      <div className="flex flex-wrap gap-2">
+        {options.map((option) => (
+          <label
+            key={option.value}
+            className={cn(
+              'has-[:focus-visible]:outline-rope-500 flex min-h-11 cursor-pointer items-center gap-2 rounded-md border px-3 py-2 text-sm has-[:focus-visible]:outline-3',
+              value === option.value
+                ? 'border-brand bg-granite-50 font-semibold'
+                : 'border-line-strong bg-paper-raised hover:border-chalk-400',
+            )}
+          >
+            <input
+              type="radio"
+              name={name}
+              value={option.value}
+              checked={value === option.value}
+              onChange={() => onChange(option.value)}
+              className="accent-granite-700 size-4"
+            />
+            <span>
+              {option.label}
+              {option.hint && <span className="text-ink-muted block text-xs font-normal">{option.hint}</span>}
+            </span>
+          </label>
+        ))}
+      </div>
+      <FieldErrors id={`${id}-error`} errors={errors} />
+    </fieldset>
   );
 }

@@ -1,13 +1,12 @@
 'use client';
 
 import { useEffect, useId, useRef, type ReactNode } from 'react';
-import { cn } from '@/components/ui/cn';
+import { cn } from './cn';
 
 /**
  * A modal built on the native <dialog>: the browser traps focus, makes the page behind it inert,
  * closes it on Escape and hands focus back to the opener — behaviour that is easy to get subtly
  * wrong by hand. Children mount only while open, so every opening starts from a fresh form.
- * (components/ui has no dialog yet; this one lives with the workbench until it does.)
  */
 export function Dialog({
   open,
