@@ -71,7 +71,7 @@ async function main() {
       NODE_ENV: 'production',
       NEXT_TELEMETRY_DISABLED: '1',
       PORT: String(port),
-      HOSTNAME: '127.0.0.1',
+      HOST: '127.0.0.1',
       DATABASE_URL: databaseFile,
       SESSION_SECRET: 'bench-secret-that-is-long-enough-for-iron-session-00',
       APP_URL: base,

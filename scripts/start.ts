@@ -5,13 +5,14 @@ import { loadLocalEnv, migrateDatabase } from './boot';
 /**
  * `npm start`: the production server on a built app. Migrates first (never seeds demo data), then
  * serves Next's request handler behind the verdict pages' front cache (lib/cache/front-cache.ts)
- * in this one process. PORT (default 3000) and HOSTNAME (default all interfaces) as `next start`.
+ * in this one process. PORT (default 3000) and HOST (default: all interfaces). Not HOSTNAME:
+ * containers set that to their own name.
  */
 async function main() {
   loadLocalEnv();
   await migrateDatabase({ seedDemo: false });
   const port = Number(process.env.PORT ?? 3000);
-  const hostname = process.env.HOSTNAME || undefined;
+  const hostname = process.env.HOST || undefined;
 
   const { default: next } = await import('next');
   const app = next({ dev: false, dir: process.cwd(), hostname: hostname ?? 'localhost', port });

@@ -82,7 +82,7 @@ export default async function setup(project: TestProject) {
     env: {
       ...env,
       PORT: String(port),
-      HOSTNAME: '127.0.0.1',
+      HOST: '127.0.0.1',
       DATABASE_URL: databaseFile,
       SESSION_SECRET: 'e2e-secret-that-is-long-enough-for-iron-session-0000',
       COOKIE_SECURE: 'false',
