@@ -50,6 +50,21 @@ interface Draft {
   tags: string;
 }
 
+/** The protocol's schedule, one optional number each, in the order a coach reads a programme. */
+const SCHEDULE_FIELDS: {
+  key: 'secondsPerSet' | 'setsPerSession' | 'sessionsPerDay' | 'daysPerWeek' | 'minHoursBetween' | 'weeks';
+  label: string;
+  help?: string;
+  inputMode: 'decimal' | 'numeric';
+}[] = [
+  { key: 'secondsPerSet', label: 'Seconds per set', help: 'Time under load in one set.', inputMode: 'decimal' },
+  { key: 'setsPerSession', label: 'Sets per session', inputMode: 'numeric' },
+  { key: 'sessionsPerDay', label: 'Sessions per day', inputMode: 'numeric' },
+  { key: 'daysPerWeek', label: 'Days per week', help: 'Empty means every day.', inputMode: 'numeric' },
+  { key: 'minHoursBetween', label: 'Rest between sessions (h)', help: 'The minimum, in hours.', inputMode: 'decimal' },
+  { key: 'weeks', label: 'Weeks', inputMode: 'decimal' },
+];
+
 const text = (n: number | null | undefined) => (n === null || n === undefined ? '' : String(n));
 
 function fromReview(review: ReviewDTO | undefined, teamId: number | undefined): Draft {
@@ -332,57 +347,18 @@ export function ClaimForm({
               : 'Enter a load and its unit to see the intensity on the common scale.'}
           </p>
           <div className="grid grid-cols-2 gap-4 lg:grid-cols-3">
-            <TextField
-              label="Seconds per set"
-              help="Time under load in one set."
-              {...field('secondsPerSet', 'protocol.secondsPerSet')}
-              optional
-              inputMode="decimal"
-              value={draft.secondsPerSet}
-              onChange={(e) => set('secondsPerSet', e.target.value)}
-            />
-            <TextField
-              label="Sets per session"
-              {...field('setsPerSession', 'protocol.setsPerSession')}
-              optional
-              inputMode="numeric"
-              value={draft.setsPerSession}
-              onChange={(e) => set('setsPerSession', e.target.value)}
-            />
-            <TextField
-              label="Sessions per day"
-              {...field('sessionsPerDay', 'protocol.sessionsPerDay')}
-              optional
-              inputMode="numeric"
-              value={draft.sessionsPerDay}
-              onChange={(e) => set('sessionsPerDay', e.target.value)}
-            />
-            <TextField
-              label="Days per week"
-              {...field('daysPerWeek', 'protocol.daysPerWeek')}
-              optional
-              inputMode="numeric"
-              help="Empty means every day."
-              value={draft.daysPerWeek}
-              onChange={(e) => set('daysPerWeek', e.target.value)}
-            />
-            <TextField
-              label="Rest between sessions (h)"
-              help="The minimum, in hours."
-              {...field('minHoursBetween', 'protocol.minHoursBetween')}
-              optional
-              inputMode="decimal"
-              value={draft.minHoursBetween}
-              onChange={(e) => set('minHoursBetween', e.target.value)}
-            />
-            <TextField
-              label="Weeks"
-              {...field('weeks', 'protocol.weeks')}
-              optional
-              inputMode="decimal"
-              value={draft.weeks}
-              onChange={(e) => set('weeks', e.target.value)}
-            />
+            {SCHEDULE_FIELDS.map((f) => (
+              <TextField
+                key={f.key}
+                label={f.label}
+                help={f.help}
+                {...field(f.key, `protocol.${f.key}`)}
+                optional
+                inputMode={f.inputMode}
+                value={draft[f.key]}
+                onChange={(e) => set(f.key, e.target.value)}
+              />
+            ))}
           </div>
           <SelectField
             label="Effort"
