@@ -7,7 +7,8 @@ import { Button } from '@/components/ui/Button';
 import { CheckboxField, RadioGroupField, SelectField, TextAreaField, TextField } from '@/components/ui/Field';
 import { FormMessage } from '@/components/ui/FormMessage';
 import { StudyCombobox } from '@/components/library/StudyCombobox';
-import { focusFirstInvalid, issuesToErrors } from '@/components/ui/form-errors';
+import { issuesToErrors } from '@/components/ui/form-errors';
+import { useDialogForm } from '@/components/review/useDialogForm';
 import {
   CONCERN_LABEL,
   DESIGN_LABEL,
@@ -27,7 +28,7 @@ import {
 } from '@/lib/reviews/types';
 import { explainApplicability, type ApplicabilityExplanation } from '@/lib/scoring/applicability';
 import { gradeCertainty, type CertaintyResult } from '@/lib/scoring/certainty';
-import { ApiError, errorMessage } from '@/lib/swr/fetcher';
+import { errorMessage } from '@/lib/swr/fetcher';
 import type { AppraisalInput } from '@/lib/swr/use-review-mutations';
 import { appraisalSchema } from '@/lib/validation/appraisals';
 import { CertaintyWorking } from './CertaintyWorking';
@@ -121,9 +122,7 @@ export function AppraisalForm({
 }) {
   const [draft, setDraft] = useState<Draft>(() => fromAppraisal(appraisal, defaultMechanismId));
   const [picking, setPicking] = useState(!appraisal);
-  const [errors, setErrors] = useState<Record<string, string[]>>({});
-  const [message, setMessage] = useState<string | undefined>();
-  const [busy, setBusy] = useState<'save' | 'delete' | null>(null);
+  const { errors, message, busy, refuse, save, remove } = useDialogForm({ onSubmit, onDelete });
   const set = <K extends keyof Draft>(key: K, value: Draft[K]) => setDraft((d) => ({ ...d, [key]: value }));
 
   const study = useMemo(() => library.find((s) => s.id === draft.studyId), [library, draft.studyId]);
@@ -191,33 +190,10 @@ export function AppraisalForm({
     const parsed = appraisalSchema.safeParse(candidate);
     if (!parsed.success) {
       const found = issuesToErrors(parsed.error.issues);
-      setErrors(found);
-      setMessage(found.studyId ? 'Pick a study from the library first.' : 'Check the fields marked below.');
-      focusFirstInvalid(form);
+      refuse(form, found, found.studyId ? 'Pick a study from the library first.' : undefined);
       return;
     }
-    setErrors({});
-    setMessage(undefined);
-    setBusy('save');
-    try {
-      await onSubmit(parsed.data);
-    } catch (error) {
-      if (error instanceof ApiError && error.issues.length) setErrors(error.fieldErrors());
-      focusFirstInvalid(form);
-      setMessage(errorMessage(error));
-      setBusy(null);
-    }
-  };
-
-  const remove = async () => {
-    if (!onDelete) return;
-    setBusy('delete');
-    try {
-      await onDelete();
-    } catch (error) {
-      setMessage(errorMessage(error));
-      setBusy(null);
-    }
+    await save(form, parsed.data);
   };
 
   return (

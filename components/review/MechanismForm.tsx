@@ -15,10 +15,10 @@ import {
   type ProtocolDTO,
 } from '@/lib/reviews/types';
 import { likelihoodTerm } from '@/lib/scoring/likelihood';
-import { errorMessage, ApiError } from '@/lib/swr/fetcher';
 import type { MechanismInput } from '@/lib/swr/use-review-mutations';
 import { mechanismSchema } from '@/lib/validation/reviews';
-import { focusFirstInvalid, issuesToErrors } from '@/components/ui/form-errors';
+import { issuesToErrors } from '@/components/ui/form-errors';
+import { useDialogForm } from './useDialogForm';
 import { EFFORT_LABEL, MAGNITUDE_LABEL, MECHANISM_KIND_HELP, MECHANISM_KIND_LABEL, percent } from './labels';
 
 interface Draft {
@@ -67,9 +67,7 @@ export function MechanismForm({
   onCancel: () => void;
 }) {
   const [draft, setDraft] = useState<Draft>(() => fromMechanism(mechanism));
-  const [errors, setErrors] = useState<Record<string, string[]>>({});
-  const [message, setMessage] = useState<string | undefined>();
-  const [busy, setBusy] = useState<'save' | 'delete' | null>(null);
+  const { errors, message, busy, refuse, save, remove } = useDialogForm<MechanismInput>({ onSubmit, onDelete });
   const set = <K extends keyof Draft>(key: K, value: Draft[K]) => setDraft((d) => ({ ...d, [key]: value }));
 
   const priorNumber = toNumber(draft.prior);
@@ -95,34 +93,11 @@ export function MechanismForm({
     };
     const parsed = mechanismSchema.safeParse(candidate);
     if (!parsed.success) {
-      setErrors(issuesToErrors(parsed.error.issues));
-      setMessage('Check the fields marked below.');
-      focusFirstInvalid(form);
+      refuse(form, issuesToErrors(parsed.error.issues));
       return;
     }
-    setErrors({});
-    setMessage(undefined);
-    setBusy('save');
-    try {
-      const { position: _position, ...input } = parsed.data;
-      await onSubmit(input);
-    } catch (error) {
-      if (error instanceof ApiError && error.issues.length) setErrors(error.fieldErrors());
-      focusFirstInvalid(form);
-      setMessage(errorMessage(error));
-      setBusy(null);
-    }
-  };
-
-  const remove = async () => {
-    if (!onDelete) return;
-    setBusy('delete');
-    try {
-      await onDelete();
-    } catch (error) {
-      setMessage(errorMessage(error));
-      setBusy(null);
-    }
+    const { position: _position, ...input } = parsed.data;
+    await save(form, input);
   };
 
   const percentHelp = (fraction: number | null) => (fraction === null ? 'not recorded' : percent(fraction));
