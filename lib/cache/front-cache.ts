@@ -59,7 +59,11 @@ export function cacheablePath(req: IncomingMessage): string | null {
 
 function send(req: IncomingMessage, res: ServerResponse, entry: Entry): void {
   if (req.headers['if-none-match'] && req.headers['if-none-match'] === entry.headers.etag) {
-    res.writeHead(304, { etag: entry.headers.etag, 'cache-control': entry.headers['cache-control'] ?? '' });
+    res.writeHead(304, {
+      etag: entry.headers.etag,
+      'cache-control': entry.headers['cache-control'] ?? '',
+      'x-loadbearing-cache': 'hit',
+    });
     res.end();
     return;
   }
