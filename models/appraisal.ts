@@ -28,7 +28,11 @@ export class Appraisal extends Model<InferAttributes<Appraisal>, InferCreationAt
   declare updatedAt: CreationOptional<Date>;
 }
 
-const concern = { type: DataTypes.STRING(16), allowNull: false, defaultValue: 'none' };
+/**
+ * A fresh definition per attribute: Sequelize writes the column name into the object it is
+ * given, so one object shared by five attributes maps all five onto the last one's column.
+ */
+const concern = () => ({ type: DataTypes.STRING(16), allowNull: false, defaultValue: 'none' });
 
 Appraisal.init(
   {
@@ -37,11 +41,11 @@ Appraisal.init(
     studyId: { type: DataTypes.INTEGER, allowNull: false },
     mechanismId: { type: DataTypes.INTEGER, allowNull: true },
     direction: { type: DataTypes.STRING(16), allowNull: false },
-    riskOfBias: concern,
-    inconsistency: concern,
-    indirectness: concern,
-    imprecision: concern,
-    publicationBias: concern,
+    riskOfBias: concern(),
+    inconsistency: concern(),
+    indirectness: concern(),
+    imprecision: concern(),
+    publicationBias: concern(),
     largeEffect: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
     doseResponse: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
     confoundingWouldReduce: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
@@ -51,5 +55,5 @@ Appraisal.init(
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,
   },
-  { sequelize: db(), tableName: 'appraisals' },
+  { sequelize: db(), modelName: 'Appraisal', tableName: 'appraisals' },
 );

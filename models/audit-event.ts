@@ -33,5 +33,5 @@ AuditEvent.init(
     data: { type: DataTypes.JSON, allowNull: true },
     createdAt: DataTypes.DATE,
   },
-  { sequelize: db(), tableName: 'audit_events', updatedAt: false },
+  { sequelize: db(), modelName: 'AuditEvent', tableName: 'audit_events', updatedAt: false },
 );

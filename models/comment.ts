@@ -32,5 +32,5 @@ Comment.init(
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,
   },
-  { sequelize: db(), tableName: 'review_comments' },
+  { sequelize: db(), modelName: 'Comment', tableName: 'review_comments' },
 );

@@ -21,5 +21,5 @@ Follow.init(
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,
   },
-  { sequelize: db(), tableName: 'follows' },
+  { sequelize: db(), modelName: 'Follow', tableName: 'follows' },
 );

@@ -38,5 +38,5 @@ Invitation.init(
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,
   },
-  { sequelize: db(), tableName: 'invitations' },
+  { sequelize: db(), modelName: 'Invitation', tableName: 'invitations' },
 );

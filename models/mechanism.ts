@@ -36,5 +36,5 @@ Mechanism.init(
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,
   },
-  { sequelize: db(), tableName: 'mechanisms' },
+  { sequelize: db(), modelName: 'Mechanism', tableName: 'mechanisms' },
 );

@@ -29,5 +29,5 @@ Membership.init(
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,
   },
-  { sequelize: db(), tableName: 'memberships' },
+  { sequelize: db(), modelName: 'Membership', tableName: 'memberships' },
 );

@@ -31,5 +31,5 @@ PasswordResetToken.init(
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,
   },
-  { sequelize: db(), tableName: 'password_reset_tokens' },
+  { sequelize: db(), modelName: 'PasswordResetToken', tableName: 'password_reset_tokens' },
 );

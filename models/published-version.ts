@@ -36,7 +36,7 @@ Publication.init(
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,
   },
-  { sequelize: db(), tableName: 'publications' },
+  { sequelize: db(), modelName: 'Publication', tableName: 'publications' },
 );
 
 /**
@@ -68,7 +68,7 @@ PublishedVersion.init(
     createdAt: DataTypes.DATE,
   },
   {
-    sequelize: db(),
+    sequelize: db(), modelName: 'PublishedVersion',
     tableName: 'published_versions',
     updatedAt: false,
     // A version is written once; refusing updates here backs the rule up in code.

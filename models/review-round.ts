@@ -45,5 +45,5 @@ ReviewRound.init(
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,
   },
-  { sequelize: db(), tableName: 'review_rounds' },
+  { sequelize: db(), modelName: 'ReviewRound', tableName: 'review_rounds' },
 );

@@ -53,5 +53,5 @@ Review.init(
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,
   },
-  { sequelize: db(), tableName: 'reviews' },
+  { sequelize: db(), modelName: 'Review', tableName: 'reviews' },
 );

@@ -26,5 +26,5 @@ RoundInvitation.init(
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,
   },
-  { sequelize: db(), tableName: 'round_invitations' },
+  { sequelize: db(), modelName: 'RoundInvitation', tableName: 'round_invitations' },
 );

@@ -34,5 +34,5 @@ Scorecard.init(
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,
   },
-  { sequelize: db(), tableName: 'scorecards' },
+  { sequelize: db(), modelName: 'Scorecard', tableName: 'scorecards' },
 );

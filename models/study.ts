@@ -58,5 +58,5 @@ Study.init(
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,
   },
-  { sequelize: db(), tableName: 'studies' },
+  { sequelize: db(), modelName: 'Study', tableName: 'studies' },
 );

@@ -23,5 +23,5 @@ Team.init(
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,
   },
-  { sequelize: db(), tableName: 'teams' },
+  { sequelize: db(), modelName: 'Team', tableName: 'teams' },
 );

@@ -33,7 +33,7 @@ User.init(
     updatedAt: DataTypes.DATE,
   },
   {
-    sequelize: db(),
+    sequelize: db(), modelName: 'User',
     tableName: 'users',
     // The hash must never reach a response: it is only loaded where a password is checked.
     defaultScope: { attributes: { exclude: ['passwordHash'] } },
