@@ -23,3 +23,4 @@ export {
 } from './mechanism';
 export * from './types';
 export * from './verdict';
+export * from './direction';
