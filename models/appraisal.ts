@@ -24,6 +24,10 @@ export class Appraisal extends Model<InferAttributes<Appraisal>, InferCreationAt
   declare applicabilityOverride: number | null;
   declare overrideReason: string | null;
   declare notes: CreationOptional<string>;
+  /** Why the coach's direction differs from the one the study's effect suggests (docs/scoring.md §10). */
+  declare directionReason: CreationOptional<string | null>;
+  /** Saved before each domain had its own column: a coach must check and save it again. */
+  declare needsCheck: CreationOptional<boolean>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -52,6 +56,8 @@ Appraisal.init(
     applicabilityOverride: { type: DataTypes.FLOAT, allowNull: true },
     overrideReason: { type: DataTypes.TEXT, allowNull: true },
     notes: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
+    directionReason: { type: DataTypes.TEXT, allowNull: true },
+    needsCheck: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,
   },

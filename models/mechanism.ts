@@ -15,6 +15,8 @@ export class Mechanism extends Model<InferAttributes<Mechanism>, InferCreationAt
   declare magnitude: CreationOptional<string>;
   /** The claim names this mechanism as the reason it works. */
   declare stated: CreationOptional<boolean>;
+  /** Which way this mechanism's measure is desirable (docs/scoring.md §10). */
+  declare desirable: CreationOptional<string>;
   declare position: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -32,6 +34,7 @@ Mechanism.init(
     prior: { type: DataTypes.FLOAT, allowNull: false, defaultValue: 0.5 },
     magnitude: { type: DataTypes.STRING(16), allowNull: false, defaultValue: 'moderate' },
     stated: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
+    desirable: { type: DataTypes.STRING(8), allowNull: false, defaultValue: 'higher' },
     position: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,

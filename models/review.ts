@@ -19,6 +19,8 @@ export class Review extends Model<InferAttributes<Review>, InferCreationAttribut
   declare protocol: Record<string, unknown>;
   declare populationStatus: string | null;
   declare populationInjured: CreationOptional<boolean>;
+  /** Which way the claimed outcome's measure is desirable (docs/scoring.md §10). */
+  declare outcomeDesirable: CreationOptional<string>;
   declare status: CreationOptional<string>;
   /** Tiptap (ProseMirror) JSON document. */
   declare body: Record<string, unknown>;
@@ -44,6 +46,7 @@ Review.init(
     protocol: { type: DataTypes.JSON, allowNull: false },
     populationStatus: { type: DataTypes.STRING(16), allowNull: true },
     populationInjured: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
+    outcomeDesirable: { type: DataTypes.STRING(8), allowNull: false, defaultValue: 'higher' },
     status: { type: DataTypes.STRING(16), allowNull: false, defaultValue: 'draft' },
     body: { type: DataTypes.JSON, allowNull: false },
     recommendations: { type: DataTypes.JSON, allowNull: false },

@@ -7,7 +7,7 @@ import { measureWords } from './heterogeneity';
 export interface ForestRow {
   id: string | number;
   label: string;
-  yi: number;
+  effectSize: number;
   ciLow: number;
   ciHigh: number;
   /** Share of the total weight, 0…100. */
@@ -113,7 +113,7 @@ export function ForestPlot({
   const description =
     `${rows.length} studies. ` +
     rows
-      .map((r) => `${r.label}: ${num(r.yi)} (95 % CI ${num(r.ciLow)} to ${num(r.ciHigh)}), weight ${num(r.weight)} %.`)
+      .map((r) => `${r.label}: ${num(r.effectSize)} (95 % CI ${num(r.ciLow)} to ${num(r.ciHigh)}), weight ${num(r.weight)} %.`)
       .join(' ') +
     (pooled ? ` Pooled: ${num(pooled.estimate)} (95 % CI ${num(pooled.ciLow)} to ${num(pooled.ciHigh)}).` : '') +
     (predictionInterval
@@ -177,10 +177,10 @@ export function ForestPlot({
                   strokeWidth={1.5}
                 />
               )}
-              <rect x={x(r.yi) - s / 2} y={y - s / 2} width={s} height={s} className="fill-granite-700" />
+              <rect x={x(r.effectSize) - s / 2} y={y - s / 2} width={s} height={s} className="fill-granite-700" />
               {!narrow && (
                 <text x={width - 4} y={y + 4} textAnchor="end" className="fill-ink-muted text-[11px] tabular-nums">
-                  {num(r.yi)} [{num(r.ciLow)}, {num(r.ciHigh)}] · {num(r.weight)} %
+                  {num(r.effectSize)} [{num(r.ciLow)}, {num(r.ciHigh)}] · {num(r.weight)} %
                 </text>
               )}
             </g>

@@ -56,7 +56,7 @@ export function MetaAnalysisPanel({
         rows={data.studies.map((s) => ({
           id: s.appraisalId,
           label: s.citation,
-          yi: s.yi,
+          effectSize: s.effectSize,
           ciLow: s.ciLow,
           ciHigh: s.ciHigh,
           weight: s.weight,
@@ -122,11 +122,11 @@ export function MetaAnalysisPanel({
                   <th scope="row" className="py-1.5 pr-2 text-left font-normal">
                     {s.citation}
                   </th>
-                  <td className="py-1.5 pr-2 text-right">{n2(s.yi)}</td>
+                  <td className="py-1.5 pr-2 text-right">{n2(s.effectSize)}</td>
                   <td className="py-1.5 pr-2 text-right">
                     {n2(s.ciLow)} to {n2(s.ciHigh)}
                   </td>
-                  <td className="py-1.5 pr-2 text-right">{formatNumber(s.vi, 4)}</td>
+                  <td className="py-1.5 pr-2 text-right">{formatNumber(s.variance, 4)}</td>
                   <td className="py-1.5 text-right">{n2(s.weight)} %</td>
                 </tr>
               ))}

@@ -44,7 +44,7 @@ function describeEffect(study: StudyDTO): string {
     case 'two-by-two':
       return `2×2 table a ${e.a}, b ${e.b}, c ${e.c}, d ${e.d} (${e.measure === 'risk-ratio' ? 'risk ratio' : 'odds ratio'})`;
     case 'ready':
-      return `${e.measure} ${e.yi}, variance ${e.vi}`;
+      return `${e.measure} ${e.effectSize}, variance ${e.variance}`;
   }
 }
 

@@ -20,7 +20,7 @@ const EFFECT_KIND_LABEL: Record<Exclude<EffectKind, ''>, string> = {
   ready: 'A ready effect size and its variance',
 };
 
-const EFFECT_FIELDS: Record<Exclude<EffectKind, ''>, { key: string; label: string }[]> = {
+const EFFECT_FIELDS: Record<Exclude<EffectKind, ''>, { key: string; label: string; help?: string }[]> = {
   means: [
     { key: 'm1', label: 'Mean, protocol group' },
     { key: 'sd1', label: 'SD, protocol group' },
@@ -41,8 +41,16 @@ const EFFECT_FIELDS: Record<Exclude<EffectKind, ''>, { key: string; label: strin
     { key: 'd', label: 'd: comparison, no event' },
   ],
   ready: [
-    { key: 'yi', label: 'Effect size (yi)' },
-    { key: 'vi', label: 'Variance (vi)' },
+    {
+      key: 'effectSize',
+      label: 'Effect size',
+      help: 'The study’s difference between groups on the chosen scale; 0 means no difference.',
+    },
+    {
+      key: 'variance',
+      label: 'Variance of the effect size',
+      help: 'Its standard error squared; smaller means more precise. Above 0.',
+    },
   ],
 };
 
@@ -237,6 +245,7 @@ export function StudyMetaForm({
               <TextField
                 key={f.key}
                 label={f.label}
+                help={f.help}
                 name={`effect.${f.key}`}
                 inputMode="decimal"
                 value={values[f.key] ?? ''}

@@ -150,7 +150,7 @@ export const DEMO_STUDIES: DemoStudyMeta[] = [
     intensity: 0.8,
     durationWeeks: 6,
     outcome: 'Latissimus dorsi thickness (ultrasound), change',
-    effect: { kind: 'ready', yi: 0.08, vi: 0.06, measure: 'smd' },
+    effect: { kind: 'ready', effectSize: 0.08, variance: 0.06, measure: 'smd' },
     tags: ['pulling', 'hypertrophy'],
   },
   {

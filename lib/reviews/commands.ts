@@ -13,6 +13,8 @@ import {
 } from '@/lib/validation/reviews';
 import { Appraisal, Mechanism, Review, Study } from '@/models';
 import { deriveAppraisal } from './derive';
+import { directionReasonIssue, suggestedDirectionFor } from './direction-check';
+import { targetDesirable } from './meta';
 import { reviewDTO } from './queries';
 import { appraisalFacts, targetFacts, toAppraisalDTO, toMechanismDTO } from './rows';
 import type { AppraisalDTO, MechanismDTO, ReviewDTO } from './types';
@@ -57,6 +59,7 @@ export async function createReview(authorId: number, input: CreateReviewInput): 
             protocol: input.protocol,
             populationStatus: input.population.status,
             populationInjured: input.population.injured,
+            outcomeDesirable: input.outcomeDesirable,
             body: { ...EMPTY_BODY, content: [] },
             recommendations: { whoMightTry: '', whoShouldNot: '', whatInstead: '' },
             tags: input.tags,
@@ -252,9 +255,24 @@ async function appraisalDTO(review: Review, appraisal: Appraisal, study: Study):
   return toAppraisalDTO(appraisal, deriveAppraisal(appraisalFacts(appraisal), studyFacts(study), targetFacts(review)));
 }
 
+/** 400 when the direction differs from the one the study's effect suggests and no reason is given. */
+async function checkDirectionReason(
+  review: Review,
+  study: Study,
+  value: { direction: string; directionReason: string | null | undefined; mechanismId: number | null },
+  transaction: Transaction,
+) {
+  const mechanism =
+    value.mechanismId === null ? null : await Mechanism.findByPk(value.mechanismId, { transaction, attributes: ['desirable'] });
+  const suggested = suggestedDirectionFor(study.effect, targetDesirable(mechanism, review.outcomeDesirable));
+  const issue = directionReasonIssue({ ...value, suggested });
+  if (issue) throw badRequest(issue.message, [issue]);
+}
+
 export async function createAppraisal(review: Review, input: AppraisalInput): Promise<AppraisalDTO> {
   const { appraisal, study } = await writeTransaction(async (transaction) => {
     const study = await checkReferences(review, input.studyId, input.mechanismId, transaction);
+    await checkDirectionReason(review, study, input, transaction);
     await assertNotAppraisedTwice(review.id, input.studyId, input.mechanismId, transaction);
     const appraisal = await Appraisal.create({ ...input, reviewId: review.id }, { transaction });
     await refreshVerdict(review.id, { transaction, touch: true });
@@ -280,9 +298,20 @@ export async function updateAppraisal(
   const study = await writeTransaction(async (transaction) => {
     const study = await checkReferences(review, studyId, mechanismId, transaction);
     await assertNotAppraisedTwice(review.id, studyId, mechanismId, transaction, appraisal.id);
-    // Clearing the override clears its reason with it.
+    await checkDirectionReason(
+      review,
+      study,
+      {
+        direction: input.direction ?? appraisal.direction,
+        directionReason: input.directionReason !== undefined ? input.directionReason : appraisal.directionReason,
+        mechanismId,
+      },
+      transaction,
+    );
+    // Clearing the override clears its reason with it; a save by a coach is the check an
+    // appraisal stored before the domains' fix was waiting for.
     await appraisal.update(
-      { ...input, ...(merged.applicabilityOverride === null ? { overrideReason: null } : {}) },
+      { ...input, needsCheck: false, ...(merged.applicabilityOverride === null ? { overrideReason: null } : {}) },
       { transaction },
     );
     await refreshVerdict(review.id, { transaction, touch: true });

@@ -7,6 +7,7 @@ import {
   smdFromMeans,
   smdFromT,
 } from '@/lib/stats';
+import { orientEffect, type Desirable } from '@/lib/scoring/direction';
 import type { Appraisal, Mechanism, Study } from '@/models';
 import type { Direction, EffectDataDTO, EffectMeasure, ForestRowDTO, MetaAnalysisDTO, PoolableDTO } from './types';
 
@@ -31,8 +32,8 @@ import type { Direction, EffectDataDTO, EffectMeasure, ForestRowDTO, MetaAnalysi
 
 export interface ComparableEffect {
   measure: EffectMeasure;
-  yi: number;
-  vi: number;
+  effectSize: number;
+  variance: number;
   /** True when the effect was moved to the pooled scale (log OR → d). */
   converted: boolean;
 }
@@ -41,28 +42,28 @@ export function comparableEffect(effect: EffectDataDTO): ComparableEffect {
   switch (effect.kind) {
     case 'means': {
       const smd = smdFromMeans(effect);
-      return { measure: 'smd', yi: smd.g, vi: smd.vg, converted: false };
+      return { measure: 'smd', effectSize: smd.g, variance: smd.vg, converted: false };
     }
     case 't': {
       const smd = smdFromT(effect);
-      return { measure: 'smd', yi: smd.g, vi: smd.vg, converted: false };
+      return { measure: 'smd', effectSize: smd.g, variance: smd.vg, converted: false };
     }
     case 'two-by-two': {
       const table = { a: effect.a, b: effect.b, c: effect.c, d: effect.d };
       if (effect.measure === 'risk-ratio') {
         const rr = logRiskRatio(table);
-        return { measure: 'log-risk-ratio', yi: rr.yi, vi: rr.vi, converted: false };
+        return { measure: 'log-risk-ratio', effectSize: rr.yi, variance: rr.vi, converted: false };
       }
       const or = logOddsRatio(table);
       const d = logOddsRatioToD(or.yi, or.vi);
-      return { measure: 'smd', yi: d.d, vi: d.vd!, converted: true };
+      return { measure: 'smd', effectSize: d.d, variance: d.vd!, converted: true };
     }
     case 'ready': {
       if (effect.measure === 'log-odds-ratio') {
-        const d = logOddsRatioToD(effect.yi, effect.vi);
-        return { measure: 'smd', yi: d.d, vi: d.vd!, converted: true };
+        const d = logOddsRatioToD(effect.effectSize, effect.variance);
+        return { measure: 'smd', effectSize: d.d, variance: d.vd!, converted: true };
       }
-      return { measure: effect.measure, yi: effect.yi, vi: effect.vi, converted: false };
+      return { measure: effect.measure, effectSize: effect.effectSize, variance: effect.variance, converted: false };
     }
   }
 }
@@ -125,6 +126,12 @@ export function poolableTargets(appraisals: Appraisal[], studies: Map<number, St
   return out.sort((a, b) => (a.mechanismId ?? 0) - (b.mechanismId ?? 0));
 }
 
+/** Which way a target's measure is desirable: the mechanism's own, else the claimed outcome's. */
+export function targetDesirable(mechanism: { desirable?: string } | null, outcomeDesirable?: string): Desirable {
+  const value = mechanism ? mechanism.desirable : outcomeDesirable;
+  return value === 'lower' ? 'lower' : 'higher';
+}
+
 export type MetaOutcome = { ok: true; result: MetaAnalysisDTO } | { ok: false; found: number; measure: EffectMeasure };
 
 /** Pools the effect sizes of one target's appraisals. */
@@ -133,8 +140,11 @@ export function metaAnalyze(input: {
   appraisals: Appraisal[];
   studies: Map<number, Study>;
   measure?: EffectMeasure;
+  /** Which way the claimed outcome's measure is desirable; a mechanism carries its own. */
+  outcomeDesirable?: Desirable;
 }): MetaOutcome {
   const targetId = input.mechanism?.id ?? null;
+  const desirable = targetDesirable(input.mechanism, input.outcomeDesirable);
   const list = candidates(
     input.appraisals.filter((a) => a.mechanismId === targetId),
     input.studies,
@@ -143,21 +153,24 @@ export function metaAnalyze(input: {
   const included = list.filter((c) => c.effect?.measure === measure);
   if (included.length < 2) return { ok: false, found: included.length, measure };
 
-  const effects = included.map((c) => ({ yi: c.effect!.yi, vi: c.effect!.vi }));
+  // Oriented (docs/scoring.md §10): right of 0 is always the claimed benefit, so a pain score
+  // that should fall is drawn and pooled with its sign flipped.
+  const oriented = included.map((c) => orientEffect(c.effect!.effectSize, desirable));
+  const effects = included.map((c, i) => ({ yi: oriented[i], vi: c.effect!.variance }));
   const fixed = metaAnalysis(effects, { method: 'fixed' });
   const random = metaAnalysis(effects, { method: 'DL' });
   const z = normalQuantile(0.975);
   const studies: ForestRowDTO[] = included.map((c, i) => {
-    const se = Math.sqrt(c.effect!.vi);
+    const se = Math.sqrt(c.effect!.variance);
     return {
       appraisalId: c.appraisal.id,
       studyId: c.study.id,
       citation: c.study.citation,
       direction: c.appraisal.direction as Direction,
-      yi: c.effect!.yi,
-      vi: c.effect!.vi,
-      ciLow: c.effect!.yi - z * se,
-      ciHigh: c.effect!.yi + z * se,
+      effectSize: oriented[i],
+      variance: c.effect!.variance,
+      ciLow: oriented[i] - z * se,
+      ciHigh: oriented[i] + z * se,
       weight: random.weights[i],
       fixedWeight: fixed.weights[i],
       source: (c.study.effect as EffectDataDTO).kind,
@@ -182,6 +195,7 @@ export function metaAnalyze(input: {
       k: included.length,
       measure,
       measureLabel: MEASURE_LABEL[measure],
+      desirable,
       studies,
       fixed,
       random,

@@ -5,6 +5,7 @@ import { toStudyDTO } from '@/lib/library/dto';
 import { appraisalCounts } from '@/lib/library/studies';
 import { bodyReferences } from '@/lib/validation/reviews';
 import { Appraisal, Mechanism, Review, Study, User } from '@/models';
+import type { Desirable } from '@/lib/scoring/direction';
 import { MEASURE_LABEL, metaAnalyze, poolableTargets } from './meta';
 import { toAppraisalDTO, toMechanismDTO, toReviewDTO, toSummaryDTO } from './rows';
 import { deriveAll, loadReviewData } from './verdict';
@@ -119,7 +120,13 @@ export async function reviewMetaAnalysis(
   if (!data) throw notFound('That review');
   const mechanism = target === 'outcome' ? null : (data.mechanisms.find((m) => m.id === target) ?? null);
   if (target !== 'outcome' && !mechanism) throw notFound('That mechanism');
-  const outcome = metaAnalyze({ mechanism, appraisals: data.appraisals, studies: data.studies, measure });
+  const outcome = metaAnalyze({
+    mechanism,
+    appraisals: data.appraisals,
+    studies: data.studies,
+    measure,
+    outcomeDesirable: data.review.outcomeDesirable as Desirable,
+  });
   if (!outcome.ok) {
     const what = mechanism ? `“${mechanism.name}”` : 'the claimed outcome';
     throw badRequest(

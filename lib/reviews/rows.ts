@@ -20,6 +20,7 @@ import type {
 import type { AppraisalFacts, DerivedAppraisal, TargetFacts } from './derive';
 import type { AppraisalRowFacts, ReviewFacts } from './verdict';
 import { VERDICT_LABEL } from '@/lib/scoring/constants';
+import type { Desirable } from '@/lib/scoring/direction';
 
 /**
  * Model rows → the DTOs of ./types.ts. The models keep enumerations as plain strings (models
@@ -96,6 +97,7 @@ export function toReviewDTO(review: Review, authorName: string): ReviewDTO {
       whoShouldNot: recommendations.whoShouldNot ?? '',
       whatInstead: recommendations.whatInstead ?? '',
     },
+    outcomeDesirable: review.outcomeDesirable as Desirable,
     version: review.version,
     createdAt: review.createdAt.toISOString(),
   };
@@ -113,6 +115,7 @@ export function toMechanismDTO(m: Mechanism): MechanismDTO {
     prior: m.prior,
     magnitude: m.magnitude as Magnitude,
     stated: m.stated,
+    desirable: m.desirable as Desirable,
     position: m.position,
   };
 }
@@ -140,6 +143,8 @@ export function toAppraisalDTO(a: Appraisal, derived: DerivedAppraisal): Apprais
     mechanismId: a.mechanismId,
     ...appraisalFacts(a),
     overrideReason: a.overrideReason,
+    directionReason: a.directionReason ?? null,
+    needsCheck: a.needsCheck,
     notes: a.notes,
     certainty: derived.certainty.level,
     suggestedApplicability: derived.suggestion.applicability,

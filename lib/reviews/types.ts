@@ -82,6 +82,8 @@ export interface ReviewDTO extends ReviewSummaryDTO {
   body: Record<string, unknown>;
   recommendations: RecommendationsDTO;
   /** Optimistic-locking counter: send it back with every PATCH; a stale one gets 409. */
+  /** Which way the claimed outcome's measure is desirable (docs/scoring.md §10). */
+  outcomeDesirable: 'higher' | 'lower';
   version: number;
   createdAt: string;
 }
@@ -97,6 +99,8 @@ export interface MechanismDTO {
   prior: number;
   magnitude: Magnitude;
   stated: boolean;
+  /** Which way this mechanism's measure is desirable (docs/scoring.md §10). */
+  desirable: 'higher' | 'lower';
   position: number;
 }
 
@@ -105,7 +109,7 @@ export type EffectDataDTO =
   | { kind: 'means'; m1: number; sd1: number; n1: number; m2: number; sd2: number; n2: number }
   | { kind: 't'; t: number; n1: number; n2: number }
   | { kind: 'two-by-two'; a: number; b: number; c: number; d: number; measure: 'risk-ratio' | 'odds-ratio' }
-  | { kind: 'ready'; yi: number; vi: number; measure: 'smd' | 'log-risk-ratio' | 'log-odds-ratio' };
+  | { kind: 'ready'; effectSize: number; variance: number; measure: 'smd' | 'log-risk-ratio' | 'log-odds-ratio' };
 
 export interface StudyDTO {
   id: number;
@@ -150,6 +154,10 @@ export interface AppraisalDTO {
   confoundingWouldReduce: boolean;
   applicabilityOverride: number | null;
   overrideReason: string | null;
+  /** Why the direction differs from the one the study's effect suggests. */
+  directionReason: string | null;
+  /** Stored before each certainty domain had its own column: a coach must check and save it. */
+  needsCheck: boolean;
   notes: string;
   /** Derived by the scoring engine. */
   certainty: CertaintyLevel;
@@ -314,8 +322,8 @@ export interface ForestRowDTO {
   studyId: number;
   citation: string;
   direction: Direction;
-  yi: number;
-  vi: number;
+  effectSize: number;
+  variance: number;
   ciLow: number;
   ciHigh: number;
   /** Random-effects weight, percent. */
@@ -336,6 +344,11 @@ export interface MetaAnalysisDTO {
   measure: EffectMeasure;
   /** "Standardized mean difference (Hedges' g)" or "Log risk ratio". */
   measureLabel: string;
+  /**
+   * Which way the target's measure is desirable. Every effect, interval and pooled estimate here
+   * is oriented so that a positive value is the claimed benefit (docs/scoring.md §10).
+   */
+  desirable: 'higher' | 'lower';
   studies: ForestRowDTO[];
   fixed: MetaAnalysisStatsDTO;
   random: MetaAnalysisStatsDTO;

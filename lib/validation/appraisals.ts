@@ -36,6 +36,11 @@ export const appraisalFields = {
     .trim()
     .max(2000, { error: 'Keep the reason under 2000 characters.' })
     .nullable(),
+  directionReason: z
+    .string({ error: 'The reason is text.' })
+    .trim()
+    .max(2000, { error: 'Keep the reason under 2000 characters.' })
+    .nullable(),
   notes: z.string({ error: 'Notes are text.' }).trim().max(10000, { error: 'Keep the notes under 10,000 characters.' }),
 };
 
@@ -62,6 +67,7 @@ export const appraisalSchema = z
     applicabilityOverride: appraisalFields.applicabilityOverride.default(null),
     overrideReason: appraisalFields.overrideReason.default(null),
     notes: appraisalFields.notes.default(''),
+    directionReason: appraisalFields.directionReason.default(null),
   })
   .superRefine((value, ctx) => {
     const issue = overrideIssue(value);

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { DESIRABLE_DIRECTIONS } from '@/lib/scoring/direction';
 import { BODYWEIGHT_UNITS, convertLoad, PERCENT_UNITS } from '@/lib/reviews/protocol';
 import {
   EFFORTS,
@@ -306,6 +307,11 @@ const claimUrl = z
   .nullable();
 const status = z.enum(REVIEW_STATUSES, { error: `Status must be one of: ${REVIEW_STATUSES.join(', ')}.` });
 
+/** Which way the claimed outcome's (or a mechanism's) measure is desirable (docs/scoring.md §10). */
+export const desirableField = z.enum(DESIRABLE_DIRECTIONS, {
+  error: 'Say whether more or less of the measure is the benefit (higher or lower).',
+});
+
 export const createReviewSchema = z.object({
   teamId: idParam,
   title: title.optional(),
@@ -314,6 +320,7 @@ export const createReviewSchema = z.object({
   claimUrl: claimUrl.optional().default(null),
   protocol: protocolSchema,
   population: populationSchema,
+  outcomeDesirable: desirableField.optional().default('higher'),
   tags: tagsSchema.optional().default([]),
 });
 export type CreateReviewInput = z.output<typeof createReviewSchema>;
@@ -327,6 +334,7 @@ export const updateReviewSchema = z
     claimUrl: claimUrl.optional(),
     protocol: protocolSchema.optional(),
     population: populationSchema.optional(),
+    outcomeDesirable: desirableField.optional(),
     body: bodySchema.optional(),
     recommendations: recommendationsSchema.optional(),
     tags: tagsSchema.optional(),
@@ -382,6 +390,7 @@ export const mechanismFields = {
     .lt(1, { error: 'The prior is a probability above 0 and below 1.' }),
   magnitude: z.enum(MAGNITUDES, { error: `Magnitude must be one of: ${MAGNITUDES.join(', ')}.` }),
   stated: z.boolean({ error: 'Stated must be true or false.' }),
+  desirable: desirableField,
   position: z.number({ error: 'Position must be a number.' }).int().min(0),
 };
 
@@ -394,6 +403,7 @@ export const mechanismSchema = z.object({
   prior: mechanismFields.prior.default(0.5),
   magnitude: mechanismFields.magnitude.default('moderate'),
   stated: mechanismFields.stated.default(false),
+  desirable: mechanismFields.desirable.default('higher'),
   /** Omitted: after the last mechanism. */
   position: mechanismFields.position.optional(),
 });

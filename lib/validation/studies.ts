@@ -55,8 +55,8 @@ export const effectSchema = z.discriminatedUnion(
       }),
     z.object({
       kind: z.literal('ready'),
-      yi: finite('The effect size'),
-      vi: finite('The variance').positive({ error: 'The variance must be above 0.' }),
+      effectSize: finite('The effect size'),
+      variance: finite('The variance').positive({ error: 'The variance must be above 0.' }),
       measure: z.enum(['smd', 'log-risk-ratio', 'log-odds-ratio'], {
         error: 'Measure is smd, log-risk-ratio or log-odds-ratio.',
       }),

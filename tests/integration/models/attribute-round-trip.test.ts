@@ -14,7 +14,7 @@ import { useTestApp } from '../../helpers/app';
 
 useTestApp();
 
-const all = Object.values(models).filter(
+const all = (Object.values(models) as unknown[]).filter(
   (m): m is ModelStatic<Model> => typeof m === 'function' && typeof (m as ModelStatic<Model>).getAttributes === 'function',
 );
 

@@ -80,6 +80,7 @@ describe('mechanisms', () => {
       prior: 0.5,
       magnitude: 'moderate',
       stated: true,
+      desirable: 'higher',
       position: 0,
     });
     first = a.body.mechanism.id;

@@ -34,7 +34,8 @@ const addStudy = async (title: string, effect: Record<string, unknown> | null, e
 const appraise = (studyId: number, mechanism: number | null, direction = 'supports') =>
   t.coach.call(appraisals.POST, {
     params: { id: String(reviewId) },
-    json: { studyId, mechanismId: mechanism, direction },
+    // Pooling, not the direction, is under test: a reason covers a direction the effect does not suggest.
+    json: { studyId, mechanismId: mechanism, direction, directionReason: 'Set by the test.' },
   });
 const metaOf = (query: string, client = t.coach) =>
   client.call(meta.GET, { params: { id: String(reviewId) }, path: `/api/reviews/x/meta-analysis?${query}` });
@@ -167,10 +168,10 @@ describe('GET /api/reviews/:id/meta-analysis', () => {
     expect(res.status).toBe(200);
     expect(res.body).toMatchObject({ mechanismId: otherMechanismId, target: 'Neural drive', k: 2, measure: 'smd' });
     const row = res.body.studies.find((r: { studyId: number }) => r.studyId === a);
-    expect(row.yi).toBeCloseTo(0.5924, 4);
-    expect(row.vi).toBeCloseTo(0.0411, 4);
-    expect(row.ciLow).toBeCloseTo(row.yi - 1.959964 * Math.sqrt(row.vi), 5);
-    expect(row.ciHigh).toBeCloseTo(row.yi + 1.959964 * Math.sqrt(row.vi), 5);
+    expect(row.effectSize).toBeCloseTo(0.5924, 4);
+    expect(row.variance).toBeCloseTo(0.0411, 4);
+    expect(row.ciLow).toBeCloseTo(row.effectSize - 1.959964 * Math.sqrt(row.variance), 5);
+    expect(row.ciHigh).toBeCloseTo(row.effectSize + 1.959964 * Math.sqrt(row.variance), 5);
     expect(row).toMatchObject({
       source: 'means',
       converted: false,
@@ -205,8 +206,8 @@ describe('GET /api/reviews/:id/meta-analysis', () => {
     expect(res.body.random.tau2).toBeCloseTo(0.3088, 4);
     expect(res.body.random.I2).toBeCloseTo(92.1173, 3);
     // First trial: log RR = ln((4/123)/(11/139)) = −0.8893, v = 1/4 − 1/123 + 1/11 − 1/139 = 0.3256 (metafor escalc, dat.bcg).
-    expect(res.body.studies[0].yi).toBeCloseTo(-0.8893, 4);
-    expect(res.body.studies[0].vi).toBeCloseTo(0.3256, 4);
+    expect(res.body.studies[0].effectSize).toBeCloseTo(-0.8893, 4);
+    expect(res.body.studies[0].variance).toBeCloseTo(0.3256, 4);
     // The outcome's earlier appraisal has no effect data: listed as excluded, with the reason.
     expect(res.body.excluded).toEqual([
       expect.objectContaining({ reason: 'The study has no effect data in the library.' }),
@@ -222,7 +223,7 @@ describe('GET /api/reviews/:id/meta-analysis', () => {
       d: 14,
       measure: 'odds-ratio',
     });
-    const y = await addStudy('Ready SMD study', { kind: 'ready', yi: 0.3, vi: 0.05, measure: 'smd' });
+    const y = await addStudy('Ready SMD study', { kind: 'ready', effectSize: 0.3, variance: 0.05, measure: 'smd' });
     await appraise(x, null);
     await appraise(y, null);
     const res = await metaOf('mechanism=outcome&measure=smd');
@@ -230,7 +231,7 @@ describe('GET /api/reviews/:id/meta-analysis', () => {
     expect(res.body.k).toBe(2);
     const converted = res.body.studies.find((r: { studyId: number }) => r.studyId === x);
     // ln OR = ln(12·14 / (8·6)) = 1.2528; × √3/π (Borenstein et al. 2009, ch. 7) = 0.6907.
-    expect(converted.yi).toBeCloseTo(Math.log((12 * 14) / (8 * 6)) * (Math.sqrt(3) / Math.PI), 12);
+    expect(converted.effectSize).toBeCloseTo(Math.log((12 * 14) / (8 * 6)) * (Math.sqrt(3) / Math.PI), 12);
     expect(converted.converted).toBe(true);
     expect(res.body.excluded.filter((e: { reason: string }) => /risk ratio/.test(e.reason))).toHaveLength(13);
     // Without a choice, the larger family (13 risk ratios) is pooled, and the workbench offers both targets.
