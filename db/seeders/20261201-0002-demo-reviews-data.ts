@@ -176,6 +176,8 @@ export type DemoMechanism = {
   prior: number;
   magnitude: 'none' | 'small' | 'moderate' | 'large';
   stated?: boolean;
+  /** Which way the mechanism's measure shows it working (docs/scoring.md §10); default 'higher'. */
+  desirable?: 'higher' | 'lower';
 };
 
 type Concern = 'none' | 'serious' | 'very-serious';
@@ -191,6 +193,8 @@ export type DemoAppraisal = {
   publicationBias?: Concern;
   doseResponse?: boolean;
   override?: { value: number; reason: string };
+  /** Why the direction differs from the one the study's effect suggests. */
+  directionReason?: string;
   notes: string;
 };
 
@@ -205,6 +209,8 @@ export type DemoReview = {
   claimUrl: string | null;
   protocol: Record<string, unknown>;
   population: { status: string; injured: boolean };
+  /** Which way the claimed outcome's measure is the claimed effect (docs/scoring.md §10); default 'higher'. */
+  outcomeDesirable?: 'higher' | 'lower';
   status: string;
   tags: string[];
   mechanisms: DemoMechanism[];
@@ -295,6 +301,8 @@ export const DEMO_REVIEWS: DemoReview[] = [
         mechanism: null,
         direction: 'against',
         imprecision: 'serious',
+        directionReason:
+          'The interval spans no change, but the estimate is far below the stiffening the claim promises at this exact dose.',
         notes:
           'Same dose and population as the claim; stiffness did not change more than in controls over three weeks.',
       },
@@ -303,6 +311,7 @@ export const DEMO_REVIEWS: DemoReview[] = [
         mechanism: null,
         direction: 'neutral',
         indirectness: 'serious',
+        directionReason: 'The stiffening is real, but at a heavy twelve-week dose the claim does not use.',
         notes: 'Heavy loading over twelve weeks: says little about light loading over three.',
       },
       {
@@ -327,12 +336,14 @@ export const DEMO_REVIEWS: DemoReview[] = [
         doi: '10.5555/hjts.2023.0402',
         mechanism: 'neural',
         direction: 'supports',
+        directionReason: 'The technique ratings, a secondary measure, improved clearly; the pooled score did not.',
         notes: 'Pinch technique ratings improved with daily practice.',
       },
       {
         doi: '10.5555/hjts.2023.0402',
         mechanism: 'pain',
         direction: 'supports',
+        directionReason: 'Pain on loading, reported separately, fell; the combined score with confidence did not move clearly.',
         notes: 'Pain on loading fell over six weeks.',
       },
     ],
@@ -386,6 +397,8 @@ export const DEMO_REVIEWS: DemoReview[] = [
       effort: 'hard',
     },
     population: { status: 'trained', injured: false },
+    // The claim is that gains shrink: a smaller gain with the plunge is the claimed effect.
+    outcomeDesirable: 'lower',
     status: 'approved',
     tags: ['recovery', 'strength', 'cold'],
     mechanisms: [
@@ -393,6 +406,7 @@ export const DEMO_REVIEWS: DemoReview[] = [
         key: 'anabolic',
         name: 'Blunted muscle-building signals after cooling',
         kind: 'physiological',
+        desirable: 'lower',
         stated: true,
         summary:
           'Cooling the muscle right after training lowers blood flow and protein synthesis, so less muscle is added.',
@@ -405,6 +419,7 @@ export const DEMO_REVIEWS: DemoReview[] = [
         key: 'quality',
         name: 'Poorer next session',
         kind: 'physiological',
+        desirable: 'lower',
         summary: 'Residual cooling or stiffness lowers the quality of the next session.',
         prior: 0.3,
         magnitude: 'small',
@@ -431,6 +446,7 @@ export const DEMO_REVIEWS: DemoReview[] = [
         doi: '10.5555/hjts.2019.0255',
         mechanism: null,
         direction: 'supports',
+        directionReason: 'Twelve weeks at the claimed dose; the interval only just reaches no difference.',
         notes: 'Smaller 1RM gains with the plunge over twelve weeks.',
       },
       {
@@ -438,12 +454,14 @@ export const DEMO_REVIEWS: DemoReview[] = [
         mechanism: null,
         direction: 'supports',
         imprecision: 'serious',
+        directionReason: 'Same direction as the longer trial; the width of the interval is counted as imprecision.',
         notes: 'Same direction in recreational lifters; wide interval.',
       },
       {
         doi: '10.5555/hjts.2023.0210',
         mechanism: null,
         direction: 'supports',
+        directionReason: 'Half as many responders with the plunge; a small trial, in line with the other two.',
         notes: 'Fewer responders among athletes who plunged.',
       },
       {
@@ -456,6 +474,7 @@ export const DEMO_REVIEWS: DemoReview[] = [
         doi: '10.5555/hjts.2019.0255',
         mechanism: 'anabolic',
         direction: 'supports',
+        directionReason: 'Judged on muscle thickness, reported beside the strength result, which fell clearly.',
         notes: 'Muscle thickness gains also smaller.',
       },
       {
@@ -463,6 +482,7 @@ export const DEMO_REVIEWS: DemoReview[] = [
         mechanism: 'quality',
         direction: 'against',
         imprecision: 'serious',
+        directionReason: 'The effect here is the strength gain; the next-session volume and bar speed it also reports did not differ.',
         notes: 'Session volume and bar speed were the same in both groups.',
       },
       {
@@ -593,12 +613,14 @@ export const DEMO_REVIEWS: DemoReview[] = [
         mechanism: 'hypertrophy',
         direction: 'against',
         riskOfBias: 'serious',
+        directionReason: 'The effect recorded is pulling force; muscle thickness, the measure of this mechanism, did not change.',
         notes: 'No change in muscle thickness over six weeks.',
       },
       {
         doi: '10.5555/hjts.2023.0076',
         mechanism: 'hypertrophy',
         direction: 'against',
+        directionReason: 'A near-zero change measured precisely enough to rule out the growth the claim needs.',
         notes: 'Latissimus thickness unchanged in trained climbers.',
       },
       {

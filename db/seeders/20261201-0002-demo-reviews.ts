@@ -119,6 +119,7 @@ async function insertReview(
       protocol: JSON.stringify(review.protocol),
       populationStatus: review.population.status,
       populationInjured: review.population.injured,
+      outcomeDesirable: review.outcomeDesirable ?? 'higher',
       status: review.status,
       body: JSON.stringify({ type: 'doc', content: [] }),
       recommendations: JSON.stringify(review.recommendations),
@@ -143,6 +144,7 @@ async function insertReview(
       prior: m.prior,
       magnitude: m.magnitude,
       stated: m.stated ?? false,
+      desirable: m.desirable ?? 'higher',
     };
     await q.bulkInsert('mechanisms', [{ reviewId, ...row, position, createdAt: now, updatedAt: now }]);
     const id = await idOf(sequelize, 'SELECT id FROM mechanisms WHERE reviewId = ? AND position = ?', [
@@ -173,7 +175,15 @@ async function insertReview(
       applicabilityOverride: a.override?.value ?? null,
     };
     await q.bulkInsert('appraisals', [
-      { reviewId, ...row, overrideReason: a.override?.reason ?? null, notes: a.notes, createdAt: now, updatedAt: now },
+      {
+        reviewId,
+        ...row,
+        overrideReason: a.override?.reason ?? null,
+        directionReason: a.directionReason ?? null,
+        notes: a.notes,
+        createdAt: now,
+        updatedAt: now,
+      },
     ]);
     appraisals.push({ id: appraisals.length + 1, ...row });
   }

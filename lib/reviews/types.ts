@@ -6,6 +6,7 @@
 
 import type { Direction, Effort, Magnitude } from '@/lib/scoring/types';
 import type { CertaintyLevel, Concern, StudyDesign, TrainingStatus, VerdictKey } from '@/lib/scoring/types';
+import type { EffectCheckDTO } from './effect-check';
 
 export const LOAD_UNITS = ['percent-max', 'percent-1rm', 'percent-mvc', 'percent-bodyweight', 'kg-added'] as const;
 export type LoadUnit = (typeof LOAD_UNITS)[number];
@@ -284,6 +285,8 @@ export interface VerdictDTO {
   steps: WorkingStepDTO[];
   dose: DoseCheckDTO;
   appraisals: AppraisalWorkingDTO[];
+  /** The claimed outcome's pooled effect against its probability (GET /verdict only). */
+  effectCheck?: EffectCheckDTO | null;
 }
 
 /** The two families of effect size the meta-analysis pools, never together (lib/reviews/meta.ts). */

@@ -2,6 +2,7 @@ import { Op, type Transaction } from 'sequelize';
 import { Appraisal, Mechanism, Review, Study } from '@/models';
 import { scoreMechanism, scoreReview, type ReviewInput, type ReviewScore } from '@/lib/scoring';
 import { sessionSpacingOk, weeklyTimeUnderLoad } from '@/lib/training/dose';
+import { outcomeEffectCheck } from './effect-check';
 import { deriveAppraisal, type DerivedAppraisal, type StudyFacts } from './derive';
 import { convertLoad } from './protocol';
 import { appraisalFacts, targetFacts, toProtocolDTO } from './rows';
@@ -251,7 +252,9 @@ export function verdictFromData(data: AnyReviewData): VerdictDTO {
 
 export async function reviewVerdict(reviewId: number): Promise<VerdictDTO | null> {
   const data = await loadReviewData(reviewId);
-  return data ? verdictFromData(data) : null;
+  if (!data) return null;
+  const verdict = verdictFromData(data);
+  return { ...verdict, effectCheck: outcomeEffectCheck(data, verdict.outcome.probability) };
 }
 
 /**
