@@ -31,7 +31,11 @@ import { gradeCertainty, type CertaintyResult } from '@/lib/scoring/certainty';
 import { errorMessage } from '@/lib/swr/fetcher';
 import type { AppraisalInput } from '@/lib/swr/use-review-mutations';
 import { appraisalSchema } from '@/lib/validation/appraisals';
+import { directionReasonIssue, suggestedDirectionFor } from '@/lib/reviews/direction-check';
+import { targetDesirable } from '@/lib/reviews/meta';
 import { CertaintyWorking } from './CertaintyWorking';
+import { DirectionSuggestion } from './DirectionSuggestion';
+import { NeedsCheckNotice } from './NeedsCheck';
 
 type Domain = 'riskOfBias' | 'inconsistency' | 'indirectness' | 'imprecision' | 'publicationBias';
 
@@ -59,6 +63,7 @@ interface Draft {
   /** Percent as typed. */
   applicabilityOverride: string;
   overrideReason: string;
+  directionReason: string;
   notes: string;
 }
 
@@ -78,6 +83,7 @@ const fromAppraisal = (a: AppraisalDTO | undefined, mechanismId: number | null):
   applicabilityOverride:
     a?.applicabilityOverride != null ? String(Math.round(a.applicabilityOverride * 1000) / 10) : '',
   overrideReason: a?.overrideReason ?? '',
+  directionReason: a?.directionReason ?? '',
   notes: a?.notes ?? '',
 });
 
@@ -122,7 +128,7 @@ export function AppraisalForm({
 }) {
   const [draft, setDraft] = useState<Draft>(() => fromAppraisal(appraisal, defaultMechanismId));
   const [picking, setPicking] = useState(!appraisal);
-  const { errors, message, busy, refuse, save, remove } = useDialogForm({ onSubmit, onDelete });
+  const { errors, message, busy, refuse, save, remove, clearChanged } = useDialogForm({ onSubmit, onDelete });
   const set = <K extends keyof Draft>(key: K, value: Draft[K]) => setDraft((d) => ({ ...d, [key]: value }));
 
   const study = useMemo(() => library.find((s) => s.id === draft.studyId), [library, draft.studyId]);
@@ -133,6 +139,12 @@ export function AppraisalForm({
       ),
     [appraisals, draft.mechanismId, appraisal?.id],
   );
+
+  const suggested = useMemo(() => {
+    const target = mechanisms.find((m) => m.id === draft.mechanismId) ?? null;
+    return study ? suggestedDirectionFor(study.effect, targetDesirable(target, review.outcomeDesirable)) : null;
+  }, [study, mechanisms, draft.mechanismId, review.outcomeDesirable]);
+  const needsReason = suggested !== null && suggested !== draft.direction;
 
   const certainty = useMemo(() => {
     if (!study?.design) return null;
@@ -185,11 +197,13 @@ export function AppraisalForm({
       confoundingWouldReduce: draft.confoundingWouldReduce,
       applicabilityOverride: draft.override ? overrideNumber / 100 : null,
       overrideReason: draft.override ? draft.overrideReason : null,
+      directionReason: needsReason ? draft.directionReason : null,
       notes: draft.notes,
     };
     const parsed = appraisalSchema.safeParse(candidate);
-    if (!parsed.success) {
-      const found = issuesToErrors(parsed.error.issues);
+    const reasonIssue = directionReasonIssue({ ...candidate, suggested });
+    if (!parsed.success || reasonIssue) {
+      const found = issuesToErrors([...(parsed.error?.issues ?? []), ...(reasonIssue ? [reasonIssue] : [])]);
       refuse(form, found, found.studyId ? 'Pick a study from the library first.' : undefined);
       return;
     }
@@ -197,8 +211,9 @@ export function AppraisalForm({
   };
 
   return (
-    <form onSubmit={submit} noValidate className="space-y-6">
+    <form onSubmit={submit} onChange={clearChanged} noValidate className="space-y-6">
       <FormMessage state={{ ok: false, message }} />
+      {appraisal?.needsCheck && <NeedsCheckNotice />}
 
       <section className="space-y-3" aria-labelledby="appraisal-study">
         <h3 id="appraisal-study" className="text-base font-semibold">
@@ -266,6 +281,16 @@ export function AppraisalForm({
         options={DIRECTIONS.map((d) => ({ value: d, label: DIRECTION_LABEL[d] }))}
         errors={errors.direction}
       />
+      {study && (
+        <DirectionSuggestion
+          suggested={suggested}
+          direction={draft.direction}
+          reason={draft.directionReason}
+          onUse={(d) => set('direction', d)}
+          onReason={(r) => set('directionReason', r)}
+          errors={errors.directionReason}
+        />
+      )}
 
       <div className="grid gap-6 lg:grid-cols-2">
         <fieldset className="space-y-4">

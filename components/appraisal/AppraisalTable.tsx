@@ -5,6 +5,7 @@ import { Button } from '@/components/ui/Button';
 import { cn } from '@/components/ui/cn';
 import { CERTAINTY_LABEL, DESIGN_LABEL, DIRECTION_LABEL, percent } from '@/components/review/labels';
 import type { AppraisalDTO, Direction, StudyDTO } from '@/lib/reviews/types';
+import { NeedsCheckFlag } from './NeedsCheck';
 
 const DIRECTION_MARK: Record<Direction, { mark: string; className: string }> = {
   supports: { mark: '▲', className: 'text-success-700' },
@@ -82,12 +83,24 @@ export function AppraisalTable({
                   {study?.effect && <span className="text-granite-700 mt-0.5 block text-xs">Has an effect size</span>}
                 </th>
                 <td className="py-2.5 pr-3">{study?.design ? DESIGN_LABEL[study.design] : '—'}</td>
-                <td className="py-2.5 pr-3 font-semibold">{CERTAINTY_LABEL[a.certainty]}</td>
+                <td className="py-2.5 pr-3 font-semibold" data-testid="appraisal-certainty" data-certainty={a.certainty}>
+                  {CERTAINTY_LABEL[a.certainty]}
+                  {a.needsCheck && (
+                    <span className="mt-1 block font-normal">
+                      <NeedsCheckFlag />
+                    </span>
+                  )}
+                </td>
                 <td className="py-2.5 pr-3">
                   <span aria-hidden="true" className={cn('mr-1', direction.className)}>
                     {direction.mark}
                   </span>
                   {DIRECTION_LABEL[a.direction]}
+                  {a.directionReason && (
+                    <span className="text-ink-muted block text-xs" title={a.directionReason}>
+                      against the effect’s suggestion, with a reason
+                    </span>
+                  )}
                 </td>
                 <td className="py-2.5 pr-3 text-right tabular-nums">
                   {percent(a.applicability)}

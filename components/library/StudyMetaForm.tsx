@@ -5,7 +5,7 @@ import { Button } from '@/components/ui/Button';
 import { CheckboxField, SelectField, TextField } from '@/components/ui/Field';
 import { FormMessage } from '@/components/ui/FormMessage';
 import { Spinner } from '@/components/ui/Spinner';
-import { focusFirstInvalid, issuesToErrors } from '@/components/ui/form-errors';
+import { focusFirstInvalid, issuesToErrors, withoutFieldError } from '@/components/ui/form-errors';
 import { DESIGN_LABEL, TRAINING_STATUS_LABEL } from '@/components/review/labels';
 import { STUDY_DESIGNS, TRAINING_STATUSES, type EffectDataDTO, type StudyDTO } from '@/lib/reviews/types';
 import { ApiError, apiFetch, errorMessage } from '@/lib/swr/fetcher';
@@ -143,7 +143,12 @@ export function StudyMetaForm({
   };
 
   return (
-    <form onSubmit={submit} noValidate className="space-y-5">
+    <form
+      onSubmit={submit}
+      onChange={(e) => setErrors((current) => withoutFieldError(current, e.target))}
+      noValidate
+      className="space-y-5"
+    >
       <FormMessage state={{ ok: false, message }} />
       <div className="grid gap-4 sm:grid-cols-2">
         <SelectField

@@ -6,6 +6,8 @@ import { useId, useState, type FormEvent, type ReactNode } from 'react';
 import { useSWRConfig } from 'swr';
 import { Button } from '@/components/ui/Button';
 import { CheckboxField, SelectField, TextAreaField, TextField } from '@/components/ui/Field';
+import type { Desirable } from '@/lib/scoring/direction';
+import { DesirableField } from './DesirableField';
 import { FormMessage } from '@/components/ui/FormMessage';
 import { Spinner } from '@/components/ui/Spinner';
 import { convertLoad } from '@/lib/reviews/protocol';
@@ -21,7 +23,7 @@ import {
 import { ApiError, apiFetch, errorMessage } from '@/lib/swr/fetcher';
 import { isReviewListKey } from '@/lib/swr/keys';
 import { createReviewSchema, updateReviewSchema } from '@/lib/validation/reviews';
-import { focusFirstInvalid, issuesToErrors } from '@/components/ui/form-errors';
+import { focusFirstInvalid, issuesToErrors, withoutFieldError } from '@/components/ui/form-errors';
 import { EFFORT_LABEL, LOAD_UNIT_HELP, LOAD_UNIT_LABEL, percent, TRAINING_STATUS_LABEL } from './labels';
 
 const BODYWEIGHT_UNITS: readonly LoadUnit[] = ['percent-bodyweight', 'kg-added'];
@@ -47,6 +49,7 @@ interface Draft {
   effort: Effort | '';
   status: TrainingStatus | '';
   injured: boolean;
+  outcomeDesirable: Desirable;
   tags: string;
 }
 
@@ -89,6 +92,7 @@ function fromReview(review: ReviewDTO | undefined, teamId: number | undefined): 
     effort: p?.effort ?? '',
     status: review?.population.status ?? '',
     injured: review?.population.injured ?? false,
+    outcomeDesirable: review?.outcomeDesirable ?? 'higher',
     tags: review?.tags.join(', ') ?? '',
   };
 }
@@ -120,6 +124,7 @@ function toBody(d: Draft) {
       effort: d.effort === '' ? null : d.effort,
     },
     population: { status: d.status === '' ? null : d.status, injured: d.injured },
+    outcomeDesirable: d.outcomeDesirable,
     tags: d.tags
       .split(',')
       .map((t) => t.trim())
@@ -226,7 +231,12 @@ export function ClaimForm({
 
   return (
     <>
-      <form onSubmit={submit} noValidate className="space-y-6">
+      <form
+        onSubmit={submit}
+        onChange={(e) => setErrors((current) => withoutFieldError(current, e.target))}
+        noValidate
+        className="space-y-6"
+      >
         <FormMessage state={{ ok: false, message }} />
 
         <Section title="The claim" description="As it was made: one sentence, in the claim’s own terms.">
@@ -371,6 +381,15 @@ export function ClaimForm({
               { value: '', label: 'Not stated' },
               ...EFFORTS.map((e) => ({ value: e, label: EFFORT_LABEL[e] })),
             ]}
+          />
+        </Section>
+
+        <Section title="The claimed outcome" description="What the claim promises, measured the way studies measure it.">
+          <DesirableField
+            label="Which way is the claimed effect?"
+            {...field('outcomeDesirable')}
+            value={draft.outcomeDesirable}
+            onChange={(value) => set('outcomeDesirable', value)}
           />
         </Section>
 

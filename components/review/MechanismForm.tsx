@@ -18,6 +18,8 @@ import { likelihoodTerm } from '@/lib/scoring/likelihood';
 import type { MechanismInput } from '@/lib/swr/use-review-mutations';
 import { mechanismSchema } from '@/lib/validation/reviews';
 import { issuesToErrors } from '@/components/ui/form-errors';
+import type { Desirable } from '@/lib/scoring/direction';
+import { DesirableField } from './DesirableField';
 import { useDialogForm } from './useDialogForm';
 import { EFFORT_LABEL, MAGNITUDE_LABEL, MECHANISM_KIND_HELP, MECHANISM_KIND_LABEL, percent } from './labels';
 
@@ -32,6 +34,7 @@ interface Draft {
   prior: string;
   magnitude: Magnitude;
   stated: boolean;
+  desirable: Desirable;
 }
 
 const fromMechanism = (m?: MechanismDTO): Draft => ({
@@ -43,6 +46,7 @@ const fromMechanism = (m?: MechanismDTO): Draft => ({
   prior: String(Math.round((m?.prior ?? 0.5) * 1000) / 10),
   magnitude: m?.magnitude ?? 'moderate',
   stated: m?.stated ?? false,
+  desirable: m?.desirable ?? 'higher',
 });
 
 const toNumber = (text: string): number | null => (text.trim() === '' ? null : Number(text.replace(',', '.')));
@@ -67,7 +71,10 @@ export function MechanismForm({
   onCancel: () => void;
 }) {
   const [draft, setDraft] = useState<Draft>(() => fromMechanism(mechanism));
-  const { errors, message, busy, refuse, save, remove } = useDialogForm<MechanismInput>({ onSubmit, onDelete });
+  const { errors, message, busy, refuse, save, remove, clearChanged } = useDialogForm<MechanismInput>({
+    onSubmit,
+    onDelete,
+  });
   const set = <K extends keyof Draft>(key: K, value: Draft[K]) => setDraft((d) => ({ ...d, [key]: value }));
 
   const priorNumber = toNumber(draft.prior);
@@ -90,6 +97,7 @@ export function MechanismForm({
       prior: prior === null ? Number.NaN : prior / 100,
       magnitude: draft.magnitude,
       stated: draft.stated,
+      desirable: draft.desirable,
     };
     const parsed = mechanismSchema.safeParse(candidate);
     if (!parsed.success) {
@@ -103,7 +111,7 @@ export function MechanismForm({
   const percentHelp = (fraction: number | null) => (fraction === null ? 'not recorded' : percent(fraction));
 
   return (
-    <form onSubmit={submit} noValidate className="space-y-5">
+    <form onSubmit={submit} onChange={clearChanged} noValidate className="space-y-5">
       <FormMessage state={{ ok: false, message }} />
       <TextField
         label="Name"
@@ -192,6 +200,13 @@ export function MechanismForm({
         checked={draft.stated}
         onChange={(e) => set('stated', e.target.checked)}
         errors={errors.stated}
+      />
+      <DesirableField
+        label="Which way does its measure move when it works?"
+        name="desirable"
+        value={draft.desirable}
+        onChange={(value) => set('desirable', value)}
+        errors={errors.desirable}
       />
 
       <FormFooter

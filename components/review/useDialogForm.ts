@@ -1,7 +1,7 @@
 'use client';
 
 import { useState } from 'react';
-import { focusFirstInvalid } from '@/components/ui/form-errors';
+import { focusFirstInvalid, withoutFieldError } from '@/components/ui/form-errors';
 import { ApiError, errorMessage } from '@/lib/swr/fetcher';
 
 /**
@@ -52,5 +52,9 @@ export function useDialogForm<T>({
     }
   };
 
-  return { errors, message, busy, refuse, save, remove };
+  /** A form's onChange: the changed field's error goes as soon as it is edited. */
+  const clearChanged = (event: { target: EventTarget }) =>
+    setErrors((current) => withoutFieldError(current, event.target));
+
+  return { errors, message, busy, refuse, save, remove, clearChanged };
 }

@@ -26,3 +26,16 @@ export function focusFirstInvalid(form: HTMLFormElement | null) {
     form?.querySelector<HTMLElement>('[role="alert"]')?.scrollIntoView({ block: 'center' });
   });
 }
+
+/**
+ * The errors without the one of the field just changed (by its `name`, the dotted path), so a
+ * message disappears as soon as the coach fixes the field instead of staying until the next
+ * submit. Attach as a form's onChange: React's change event bubbles from every control.
+ */
+export function withoutFieldError(errors: Record<string, string[]>, changed: EventTarget | null) {
+  const name = (changed as { name?: unknown } | null)?.name;
+  if (typeof name !== 'string' || !(name in errors)) return errors;
+  const rest = { ...errors };
+  delete rest[name];
+  return rest;
+}

@@ -9,7 +9,7 @@ import { isReviewKey, isReviewListKey } from './keys';
 /** The mechanism fields a coach edits (POST and PATCH bodies). */
 export type MechanismInput = Pick<
   MechanismDTO,
-  'name' | 'kind' | 'summary' | 'minIntensity' | 'minEffort' | 'prior' | 'magnitude' | 'stated'
+  'name' | 'kind' | 'summary' | 'minIntensity' | 'minEffort' | 'prior' | 'magnitude' | 'stated' | 'desirable'
 >;
 
 /** The appraisal fields a coach edits (POST and PATCH bodies); the derived ones are the server's. */
@@ -28,6 +28,7 @@ export type AppraisalInput = Pick<
   | 'confoundingWouldReduce'
   | 'applicabilityOverride'
   | 'overrideReason'
+  | 'directionReason'
   | 'notes'
 >;
 
