@@ -49,6 +49,7 @@ export function ForestPlot({
   predictionInterval,
   measure,
   axisLabel,
+  sides,
   title,
 }: {
   rows: readonly ForestRow[];
@@ -57,6 +58,8 @@ export function ForestPlot({
   measure: string;
   /** Overrides the axis title derived from `measure`. */
   axisLabel?: string;
+  /** Words under each end of the axis, e.g. which side is the claimed effect. */
+  sides?: { left: string; right: string };
   title: string;
 }) {
   const holder = useRef<HTMLDivElement>(null);
@@ -104,7 +107,7 @@ export function ForestPlot({
   const pooledY = TOP + rows.length * ROW + ROW * 0.9;
   const piY = pooledY + ROW * 0.9;
   const axisY = (predictionInterval ? piY : pooledY) + ROW * 0.8;
-  const height = axisY + 44;
+  const height = axisY + (sides ? 58 : 44);
   const axisTicks = ticks(lo, hi);
   const fullAxis = axisLabel ?? measureWords(measure).axis;
   // On a phone the axis title keeps its first words only; the full label is in the text below.
@@ -284,6 +287,16 @@ export function ForestPlot({
         <text x={(plotLeft + plotRight) / 2} y={axisY + 36} textAnchor="middle" className="fill-ink-muted text-[11px]">
           {axis}
         </text>
+        {sides && (
+          <g className="fill-ink text-[11px] font-semibold" data-testid="forest-sides">
+            <text x={plotLeft} y={axisY + 52} textAnchor="start">
+              ← {sides.left}
+            </text>
+            <text x={plotRight} y={axisY + 52} textAnchor="end">
+              {sides.right} →
+            </text>
+          </g>
+        )}
       </svg>
     </div>
   );

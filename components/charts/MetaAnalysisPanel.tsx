@@ -53,6 +53,7 @@ export function MetaAnalysisPanel({
         title={title}
         measure={data.measure}
         axisLabel={data.measureLabel}
+        sides={{ left: 'against the claim', right: 'the claimed effect' }}
         rows={data.studies.map((s) => ({
           id: s.appraisalId,
           label: s.citation,
@@ -70,6 +71,12 @@ export function MetaAnalysisPanel({
         predictionInterval={random.predictionInterval ?? null}
       />
       <figcaption className="space-y-2 text-sm">
+        <p className="text-ink-muted" data-testid="forest-orientation">
+          Right of 0 is the claimed effect.
+          {data.desirable === 'lower'
+            ? ' Here a lower value on the studies’ measure is the claimed effect, so every effect is drawn with its sign flipped.'
+            : ''}
+        </p>
         <p>
           <strong>Pooled effect {n2(random.estimate)}</strong> (95 % CI {n2(random.ci[0])} to {n2(random.ci[1])}; z ={' '}
           {n2(random.z)}, p {pText(random.p)}), random effects over {data.k} studies, as{' '}

@@ -10,6 +10,7 @@ import type { MechanismDTO, VerdictKey } from '@/lib/reviews/types';
 import { formatNumber } from '@/lib/scoring/format';
 import { MIN_EVIDENCE_WEIGHT } from '@/lib/scoring/constants';
 import { useVerdict } from '@/lib/swr/use-verdict';
+import { EffectConflictWarning } from './EffectConflictWarning';
 import { LikelihoodScale } from './LikelihoodScale';
 
 const VERDICT_TONE: Record<VerdictKey, BadgeTone> = {
@@ -94,6 +95,7 @@ export function VerdictPanel({ reviewId, mechanisms }: { reviewId: number; mecha
               <span className="text-ink-muted">{data.outcome.term}</span>
             </p>
             <LikelihoodScale probability={data.outcome.probability} />
+            <EffectConflictWarning check={data.effectCheck} />
           </div>
 
           <div className="space-y-1">
