@@ -1,5 +1,6 @@
 import { redirect } from 'next/navigation';
 import { AppHeader } from '@/components/layout/AppHeader';
+import { navFor } from '@/components/layout/nav';
 import { findUser } from '@/lib/auth/accounts';
 import { requirePageActor } from '@/lib/auth/current';
 
@@ -11,7 +12,7 @@ export default async function AppLayout({ children }: { children: React.ReactNod
   if (!user) redirect('/sign-in');
   return (
     <>
-      <AppHeader user={{ name: user.name, email: user.email }} />
+      <AppHeader user={{ name: user.name, email: user.email }} nav={navFor(actor)} />
       <main id="main" className="max-w-shell px-gutter mx-auto w-full flex-1 pt-8 pb-16">
         {children}
       </main>

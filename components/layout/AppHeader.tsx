@@ -2,18 +2,9 @@ import { Logo } from './Logo';
 import { NavLinks, type NavItem } from './NavLinks';
 import { SignOutButton } from './SignOutButton';
 
-// Drop `soon` from a section in the same change that adds its pages.
-const NAV: readonly NavItem[] = [
-  { href: '/dashboard', label: 'Dashboard' },
-  { href: '/reviews', label: 'Reviews' },
-  { href: '/library', label: 'Library' },
-  { href: '/verdicts', label: 'Verdicts' },
-  { href: '/search', label: 'Search' },
-  { href: '/team', label: 'Team' },
-];
 
 /** The signed-in header: sections on the left, who is signed in and the way out on the right. */
-export function AppHeader({ user }: { user: { name: string; email: string } }) {
+export function AppHeader({ user, nav }: { user: { name: string; email: string }; nav: readonly NavItem[] }) {
   return (
     <header className="border-line bg-paper/95 supports-[backdrop-filter]:bg-paper/85 sticky top-0 z-30 border-b backdrop-blur">
       <div className="max-w-shell px-gutter mx-auto">
@@ -21,7 +12,7 @@ export function AppHeader({ user }: { user: { name: string; email: string } }) {
           <div className="flex min-w-0 items-center gap-6">
             <Logo href="/dashboard" />
             <nav aria-label="Main" className="hidden md:block md:py-2">
-              <NavLinks items={NAV} />
+              <NavLinks items={nav} />
             </nav>
           </div>
           <div className="flex min-w-0 items-center gap-3">
@@ -45,7 +36,7 @@ export function AppHeader({ user }: { user: { name: string; email: string } }) {
         </div>
         {/* Phones: the sections get their own scrollable row instead of a hidden menu. */}
         <nav aria-label="Main" className="pt-1 md:hidden">
-          <NavLinks items={NAV} compact />
+          <NavLinks items={nav} compact />
         </nav>
       </div>
     </header>

@@ -7,7 +7,10 @@ export function PublicHeader({ signedIn }: { signedIn: boolean }) {
     <header className="border-line bg-paper border-b">
       <div className="max-w-shell px-gutter mx-auto flex items-center justify-between gap-3 py-3">
         <Logo />
-        <nav aria-label="Account" className="flex items-center gap-2">
+        <nav aria-label="Account" className="flex items-center gap-1 sm:gap-2">
+          <LinkButton href="/published" variant="ghost" size="sm">
+            Verdicts
+          </LinkButton>
           {signedIn ? (
             <LinkButton href="/dashboard" variant="primary" size="sm">
               Go to dashboard

@@ -1,14 +1,15 @@
 'use client';
 
 import Fuse from 'fuse.js';
+import { VerdictChip } from '@/components/verdict/VerdictChip';
 import Link from 'next/link';
 import { useMemo, useState } from 'react';
-import { Badge, type BadgeTone } from '@/components/ui/Badge';
+import { Badge } from '@/components/ui/Badge';
 import { LinkButton } from '@/components/ui/Button';
 import { EmptyState } from '@/components/ui/EmptyState';
 import { SelectField, TextField } from '@/components/ui/Field';
 import { Skeleton } from '@/components/ui/Skeleton';
-import { REVIEW_STATUSES, type ReviewSummaryDTO, type VerdictKey } from '@/lib/reviews/types';
+import { REVIEW_STATUSES, type ReviewSummaryDTO } from '@/lib/reviews/types';
 import { VERDICT_KEYS } from '@/lib/scoring/constants';
 import { useReviews } from '@/lib/swr/use-reviews';
 import { REVIEW_STATUS_LABEL, VERDICT_KEY_LABEL } from './labels';
@@ -23,13 +24,6 @@ const COLUMNS: { key: SortKey; label: string }[] = [
   { key: 'authorName', label: 'Author' },
 ];
 
-const VERDICT_TONE: Record<VerdictKey, BadgeTone> = {
-  supported: 'success',
-  'other-reasons': 'accent',
-  uncertain: 'warning',
-  'not-supported': 'danger',
-  insufficient: 'neutral',
-};
 
 // Sort in the order the workflow runs, not alphabetically.
 const statusRank = (s: ReviewSummaryDTO) => REVIEW_STATUSES.indexOf(s.status);
@@ -191,7 +185,7 @@ export function ReviewTable({
               <p className="flex flex-wrap items-center gap-2 text-xs">
                 <Badge tone="brand">{REVIEW_STATUS_LABEL[r.status]}</Badge>
                 {r.verdict && (
-                  <Badge tone={VERDICT_TONE[r.verdict]}>{r.verdictLabel ?? VERDICT_KEY_LABEL[r.verdict]}</Badge>
+                  <VerdictChip verdict={r.verdict} label={r.verdictLabel ?? VERDICT_KEY_LABEL[r.verdict]} />
                 )}
               </p>
               <p className="text-ink-muted text-xs">
@@ -242,7 +236,7 @@ export function ReviewTable({
                 <td className="px-4 py-3">{REVIEW_STATUS_LABEL[r.status]}</td>
                 <td className="px-4 py-3">
                   {r.verdict ? (
-                    <Badge tone={VERDICT_TONE[r.verdict]}>{r.verdictLabel ?? VERDICT_KEY_LABEL[r.verdict]}</Badge>
+                    <VerdictChip verdict={r.verdict} label={r.verdictLabel ?? VERDICT_KEY_LABEL[r.verdict]} />
                   ) : (
                     <span className="text-ink-muted">—</span>
                   )}

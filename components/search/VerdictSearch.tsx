@@ -5,7 +5,8 @@ import { useDeferredValue, useId, useState } from 'react';
 import useSWR from 'swr';
 import { Badge } from '@/components/ui/Badge';
 import { EmptyState } from '@/components/ui/EmptyState';
-import { longDate, VERDICT_TONE } from '@/components/verdict-page/labels';
+import { VerdictChip } from '@/components/verdict/VerdictChip';
+import { longDate } from '@/components/verdict-page/labels';
 import type { VerdictListItemDTO } from '@/lib/publishing/types';
 import { apiFetch, errorMessage } from '@/lib/swr/fetcher';
 import { Highlight } from './Highlight';
@@ -14,7 +15,16 @@ import { Highlight } from './Highlight';
  * The athlete's list of published verdicts, newest first, with a fuzzy search box (GET
  * /api/verdicts?q=): a misspelled or half-remembered word still finds a verdict.
  */
-export function VerdictSearch({ initial, teamId }: { initial: VerdictListItemDTO[]; teamId?: number }) {
+export function VerdictSearch({
+  initial,
+  teamId,
+  emptyText = 'When your team publishes a verdict, it appears here.',
+}: {
+  initial: VerdictListItemDTO[];
+  teamId?: number;
+  /** What an empty list says before any search. */
+  emptyText?: string;
+}) {
   const [q, setQ] = useState('');
   const deferred = useDeferredValue(q.trim());
   const id = useId();
@@ -46,14 +56,14 @@ export function VerdictSearch({ initial, teamId }: { initial: VerdictListItemDTO
       </div>
       {items.length === 0 ? (
         <EmptyState title={deferred ? 'Nothing matches that' : 'No verdicts yet'}>
-          {deferred ? 'Try another word, or fewer words.' : 'When your team publishes a verdict, it appears here.'}
+          {deferred ? 'Try another word, or fewer words.' : emptyText}
         </EmptyState>
       ) : (
         <ul className="space-y-3">
           {items.map((v) => (
             <li key={v.slug} className="border-line bg-paper-raised rounded-lg border p-4">
               <div className="flex flex-wrap items-center gap-2">
-                <Badge tone={VERDICT_TONE[v.verdict]}>{v.verdictLabel}</Badge>
+                <VerdictChip verdict={v.verdict} label={v.verdictLabel} />
                 {v.withdrawn && <Badge tone="danger">Withdrawn</Badge>}
                 <span className="text-ink-muted text-sm">
                   {v.teamName} · version {v.version} · {longDate(v.publishedAt)}

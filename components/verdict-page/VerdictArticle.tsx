@@ -1,9 +1,9 @@
 import Link from 'next/link';
-import { Badge } from '@/components/ui/Badge';
 import { SafetyNotice } from '@/components/ui/SafetyNotice';
 import type { VerdictPageDTO } from '@/lib/publishing/types';
 import { AudienceAdvice } from './AudienceAdvice';
-import { longDate, VERDICT_TONE } from './labels';
+import { VerdictChip } from '@/components/verdict/VerdictChip';
+import { longDate } from './labels';
 import { MechanismRanking } from './MechanismRanking';
 import { ProtocolPlain } from './ProtocolPlain';
 import { ReferenceList } from './ReferenceList';
@@ -54,9 +54,7 @@ export function VerdictArticle({ page, latest }: { page: VerdictPageDTO; latest:
         <h1 className="text-3xl leading-tight font-semibold sm:text-4xl">{s.claim}</h1>
         <div className="flex flex-wrap items-center gap-3">
           <span className="text-sm font-semibold">Verdict:</span>
-          <Badge tone={VERDICT_TONE[s.verdict.key]} className="px-3 py-1 text-sm">
-            {s.verdict.label}
-          </Badge>
+          <VerdictChip verdict={s.verdict.key} label={s.verdict.label} className="px-3 py-1 text-sm" />
         </div>
         <p className="text-lg">{s.verdict.summary}</p>
         <p className="text-ink-muted text-sm">

@@ -1,15 +1,3 @@
-import type { BadgeTone } from '@/components/ui/Badge';
-import type { VerdictKey } from '@/lib/reviews/types';
-
-/** Tones of the verdict label; words carry the meaning, colour only repeats it. */
-export const VERDICT_TONE: Record<VerdictKey, BadgeTone> = {
-  supported: 'success',
-  'not-supported': 'danger',
-  uncertain: 'warning',
-  insufficient: 'neutral',
-  'other-reasons': 'accent',
-};
-
 const DATE = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'long', year: 'numeric', timeZone: 'UTC' });
 
 /** "3 December 2026": the same on the server and in every reader's time zone (dates are UTC). */

@@ -1,6 +1,5 @@
 'use client';
 
-import { Badge, type BadgeTone } from '@/components/ui/Badge';
 import { Button } from '@/components/ui/Button';
 import { cn } from '@/components/ui/cn';
 import { SafetyNotice } from '@/components/ui/SafetyNotice';
@@ -12,14 +11,8 @@ import { MIN_EVIDENCE_WEIGHT } from '@/lib/scoring/constants';
 import { useVerdict } from '@/lib/swr/use-verdict';
 import { EffectConflictWarning } from './EffectConflictWarning';
 import { LikelihoodScale } from './LikelihoodScale';
+import { VerdictChip } from './VerdictChip';
 
-const VERDICT_TONE: Record<VerdictKey, BadgeTone> = {
-  supported: 'success',
-  'other-reasons': 'accent',
-  uncertain: 'warning',
-  'not-supported': 'danger',
-  insufficient: 'neutral',
-};
 
 /** What each verdict means, in a sentence a coach can repeat to an athlete. */
 const VERDICT_MEANING: Record<VerdictKey, string> = {
@@ -80,9 +73,10 @@ export function VerdictPanel({ reviewId, mechanisms }: { reviewId: number; mecha
             >
               {data.label}
             </p>
-            <Badge tone={VERDICT_TONE[data.verdict]}>
-              {data.verdict === 'insufficient' ? 'Provisional' : 'Current reading'}
-            </Badge>
+            <VerdictChip
+              verdict={data.verdict}
+              label={data.verdict === 'insufficient' ? 'Provisional' : 'Current reading'}
+            />
             <p className="text-ink-muted text-sm">{VERDICT_MEANING[data.verdict]}</p>
           </div>
 

@@ -1,5 +1,7 @@
 import type { Metadata } from 'next';
+import { LatestVerdicts } from '@/components/dashboard/LatestVerdicts';
 import { PendingScorecards } from '@/components/dashboard/PendingScorecards';
+import { listVerdicts } from '@/lib/publishing/queries';
 import { TeamList } from '@/components/dashboard/TeamList';
 import { PageHeader } from '@/components/layout/PageHeader';
 import { findUser } from '@/lib/auth/accounts';
@@ -40,6 +42,7 @@ export default async function DashboardPage() {
         </h2>
         <TeamList teams={teams} />
       </section>
+      {!workTeam && <LatestVerdicts verdicts={await listVerdicts(actor, { limit: 5 })} />}
       {workTeam && reviews && (
         <section aria-labelledby="reviews-heading" className="mt-10 space-y-4">
           <h2 id="reviews-heading" className="text-xl font-semibold">
