@@ -1,14 +1,21 @@
-/** A URL-friendly form of a name: lower case, ASCII letters, digits and single hyphens. */
+const MAX_SLUG = 60;
+
+/**
+ * A URL-friendly form of a name: lower case, ASCII letters, digits and single hyphens, at most 60
+ * characters, ending on a whole word (a shared link reads "…-for", never "…-imping").
+ */
 export function slugify(text: string): string {
-  return (
-    text
-      .normalize('NFKD')
-      .replace(/[\u0300-\u036f]/g, '')
-      .toLowerCase()
-      .replace(/[^a-z0-9]+/g, '-')
-      .replace(/^-+|-+$/g, '')
-      .slice(0, 60) || 'team'
-  );
+  const full = text
+    .normalize('NFKD')
+    .replace(/[\u0300-\u036f]/g, '')
+    .toLowerCase()
+    .replace(/[^a-z0-9]+/g, '-')
+    .replace(/^-+|-+$/g, '');
+  if (full.length <= MAX_SLUG) return full || 'team';
+  const cut = full.slice(0, MAX_SLUG);
+  // The cut fell inside a word: go back to the last word boundary, unless that is the only word.
+  const wholeWords = full[MAX_SLUG] === '-' ? cut : cut.slice(0, Math.max(cut.lastIndexOf('-'), 0));
+  return (wholeWords || cut).replace(/-+$/, '');
 }
 
 /** The slug, or the slug with -2, -3 … until `taken` says no. */
