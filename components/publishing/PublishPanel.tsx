@@ -15,6 +15,8 @@ interface PublicationState {
     lastPublishedAt: string;
     withdrawn: { at: string; reason: string } | null;
   } | null;
+  /** The policy's answer for this reader: may they publish or withdraw this review? */
+  mayPublish?: boolean;
 }
 
 /**
@@ -35,6 +37,7 @@ export function PublishPanel({ reviewId }: { reviewId: number }) {
   const noteId = useId();
   const reasonId = useId();
   const next = (pub?.latestNumber ?? 0) + 1;
+  const mayPublish = data?.mayPublish === true;
 
   async function run(fn: () => Promise<string>) {
     setBusy(true);
@@ -53,6 +56,14 @@ export function PublishPanel({ reviewId }: { reviewId: number }) {
 
   const publish = (e: FormEvent) => {
     e.preventDefault();
+    // Publishing for everyone cannot be taken back quietly: readers may already have copied it.
+    if (
+      visibility === 'public' &&
+      !window.confirm(
+        'Publish this verdict for anyone with the link? It can be withdrawn later, but the page says it was withdrawn and why.',
+      )
+    )
+      return;
     void run(async () => {
       const res = await apiFetch<PublishResultDTO>(key, {
         method: 'POST',
@@ -84,50 +95,58 @@ export function PublishPanel({ reviewId }: { reviewId: number }) {
           </Link>
         </p>
       )}
-      <form onSubmit={publish} className="space-y-3">
-        <fieldset className="space-y-1">
-          <legend className="text-sm font-semibold">Who may read it</legend>
-          {(['team', 'public'] as const).map((v) => (
-            <label key={v} className="flex items-center gap-2">
-              <input
-                type="radio"
-                name="visibility"
-                value={v}
-                checked={visibility === v}
-                onChange={() => setVisibility(v)}
+      {data && !mayPublish && (
+        <p className="text-ink-muted text-sm" data-testid="publish-not-allowed">
+          Only the team’s owner can publish or withdraw verdicts here; an owner can let coaches publish in the team’s
+          publishing settings.
+        </p>
+      )}
+      {mayPublish && (
+        <form onSubmit={publish} className="space-y-3">
+          <fieldset className="space-y-1">
+            <legend className="text-sm font-semibold">Who may read it</legend>
+            {(['team', 'public'] as const).map((v) => (
+              <label key={v} className="flex items-center gap-2">
+                <input
+                  type="radio"
+                  name="visibility"
+                  value={v}
+                  checked={visibility === v}
+                  onChange={() => setVisibility(v)}
+                />
+                {v === 'team' ? 'Team members only (athletes included)' : 'Anyone with the link (public)'}
+              </label>
+            ))}
+          </fieldset>
+          {next > 1 && (
+            <div className="space-y-1">
+              <label htmlFor={noteId} className="block text-sm font-semibold">
+                What changed since version {next - 1}
+              </label>
+              <textarea
+                id={noteId}
+                name="changeNote"
+                value={note}
+                onChange={(e) => setNote(e.target.value)}
+                rows={3}
+                required
+                aria-invalid={errors.changeNote ? true : undefined}
+                aria-describedby={errors.changeNote ? `${noteId}-error` : undefined}
+                className="border-line-strong block w-full rounded-md border px-3 py-2"
               />
-              {v === 'team' ? 'Team members only (athletes included)' : 'Anyone with the link (public)'}
-            </label>
-          ))}
-        </fieldset>
-        {next > 1 && (
-          <div className="space-y-1">
-            <label htmlFor={noteId} className="block text-sm font-semibold">
-              What changed since version {next - 1}
-            </label>
-            <textarea
-              id={noteId}
-              name="changeNote"
-              value={note}
-              onChange={(e) => setNote(e.target.value)}
-              rows={3}
-              required
-              aria-invalid={errors.changeNote ? true : undefined}
-              aria-describedby={errors.changeNote ? `${noteId}-error` : undefined}
-              className="border-line-strong block w-full rounded-md border px-3 py-2"
-            />
-            {errors.changeNote && (
-              <p id={`${noteId}-error`} className="text-danger-700 text-sm">
-                {errors.changeNote.join(' ')}
-              </p>
-            )}
-          </div>
-        )}
-        <Button type="submit" variant="primary" disabled={busy}>
-          {next === 1 ? 'Publish verdict' : `Publish version ${next}`}
-        </Button>
-      </form>
-      {pub && !pub.withdrawn && (
+              {errors.changeNote && (
+                <p id={`${noteId}-error`} className="text-danger-700 text-sm">
+                  {errors.changeNote.join(' ')}
+                </p>
+              )}
+            </div>
+          )}
+          <Button type="submit" variant="primary" disabled={busy}>
+            {next === 1 ? 'Publish verdict' : `Publish version ${next}`}
+          </Button>
+        </form>
+      )}
+      {mayPublish && pub && !pub.withdrawn && (
         <form onSubmit={withdraw} className="border-line space-y-2 border-t pt-3">
           <label htmlFor={reasonId} className="block text-sm font-semibold">
             Withdraw: why (readers see this)
