@@ -48,7 +48,7 @@ export function AgreementPanel({
             <div className="border-line rounded-md border p-4">
               <dt className="text-ink-muted text-sm font-semibold">Krippendorff’s α (ordinal)</dt>
               <dd className="font-display mt-1 text-3xl font-semibold" data-testid="alpha">
-                {fmt(a.alpha.ordinal)}
+                {a.alpha.missing ? '—' : fmt(a.alpha.ordinal)}
               </dd>
               <dd className="text-ink-muted mt-1 text-sm">
                 {a.alpha.interpretation ? ALPHA_WORDS[a.alpha.interpretation] : (a.alpha.missing ?? '')}
@@ -64,7 +64,11 @@ export function AgreementPanel({
                   </dd>
                 </>
               ) : (
-                <dd className="text-ink-muted mt-1 text-sm">Shown when exactly two reviewers have submitted.</dd>
+                <dd className="text-ink-muted mt-1 text-sm">
+                  {a.raters === 2 && a.alpha.missing
+                    ? a.alpha.missing
+                    : 'Shown when exactly two reviewers have submitted.'}
+                </dd>
               )}
             </div>
             <div className="border-line rounded-md border p-4">

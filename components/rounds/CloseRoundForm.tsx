@@ -28,6 +28,9 @@ export function CloseRoundForm({
   const standing = agreement?.signOffs.filter((s) => s.signOff === 'do-not-publish') ?? [];
 
   const close = async () => {
+    // Closing settles the round for good: scorecards can no longer change and the review's status moves.
+    if (!window.confirm('Close this round? Scorecards can no longer be submitted or changed, and this cannot be undone.'))
+      return;
     setBusy(true);
     setError(null);
     try {

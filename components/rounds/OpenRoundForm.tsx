@@ -113,6 +113,11 @@ export function OpenRoundForm({
                 </li>
               ))}
             </ul>
+            {chosen.length === 1 && (
+              <p className="text-warning-800 mt-1.5 text-sm" role="status" data-testid="one-reviewer-warning">
+                With one reviewer there is no agreement to read: α and κ need at least two submitted scorecards.
+              </p>
+            )}
             {fieldErrors.reviewerIds && (
               <p id={`${id}-reviewers-error`} className="text-danger-700 mt-1.5 text-sm font-medium">
                 {fieldErrors.reviewerIds.join(' ')}

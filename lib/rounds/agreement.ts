@@ -46,6 +46,13 @@ function alphaOrNull(matrix: RatingMatrix, metric: 'ordinal' | 'nominal' | 'inte
   }
 }
 
+/**
+ * Fewest mechanisms rated by two reviewers or more before α or κ gets a strength word: with one
+ * or two items a single disagreement swings the coefficient across every band of its reading
+ * (common practice; Krippendorff 2004, ch. 11, asks for enough units to sample the scale).
+ */
+export const MIN_AGREEMENT_ITEMS = 3;
+
 export type AgreementFigures = Pick<
   AgreementDTO,
   'raters' | 'alpha' | 'kappa' | 'mechanisms' | 'flaggedCount' | 'unresolvedFlags'
@@ -73,10 +80,18 @@ export function assembleAgreement(input: AgreementInput): AgreementFigures {
       interpretation: ordinal === null ? null : interpretAlpha(ordinal),
       missing: ordinal === null ? 'No mechanism has two ratings yet.' : null,
     };
+    const items = mechanisms.filter((_, column) => matrix.filter((row) => row[column] !== null).length >= 2).length;
+    if (ordinal !== null && items < MIN_AGREEMENT_ITEMS) {
+      alpha = {
+        ...alpha,
+        interpretation: null,
+        missing: `A reading of agreement needs at least ${MIN_AGREEMENT_ITEMS} mechanisms rated by two reviewers or more; ${items} so far.`,
+      };
+    }
   }
 
   let kappa: AgreementDTO['kappa'] = null;
-  if (raters === 2) {
+  if (raters === 2 && alpha.missing === null) {
     try {
       const linear = cohenKappa(matrix[0], matrix[1], { weights: 'linear', categories: [...BAND_CATEGORIES] });
       const quadratic = cohenKappa(matrix[0], matrix[1], { weights: 'quadratic', categories: [...BAND_CATEGORIES] });
