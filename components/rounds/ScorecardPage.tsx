@@ -1,6 +1,7 @@
 'use client';
 
 import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
+import { INCOMPLETE_SCORECARD, scorecardGaps } from '@/lib/rounds/scorecard-complete';
 import { LocalTime } from '@/components/review/LocalTime';
 import { Badge } from '@/components/ui/Badge';
 import { Button } from '@/components/ui/Button';
@@ -104,6 +105,18 @@ export function ScorecardPage({ view }: { view: ScorecardViewDTO }) {
       for (const key of Object.keys(patch)) delete next[`mechanism.${mechanismId}.${key}`];
       return next;
     });
+  };
+
+  // Check first: "you cannot change this afterwards" is asked only of a complete scorecard.
+  const askToSubmit = () => {
+    const gaps = scorecardGaps(mechanisms, { ratings, signOff });
+    if (gaps.length) {
+      setErrors(Object.fromEntries(gaps.map((g) => [g.path, g.message])));
+      setSubmitError(INCOMPLETE_SCORECARD);
+      return;
+    }
+    setSubmitError(null);
+    setConfirming(true);
   };
 
   const submit = async () => {
@@ -339,7 +352,7 @@ export function ScorecardPage({ view }: { view: ScorecardViewDTO }) {
           {!locked && (
             <div className="border-line flex flex-wrap items-center gap-3 border-t pt-4">
               {!confirming ? (
-                <Button onClick={() => setConfirming(true)}>Submit scorecard</Button>
+                <Button onClick={askToSubmit}>Submit scorecard</Button>
               ) : (
                 <div role="group" aria-label="Confirm submission" className="flex flex-wrap items-center gap-2">
                   <span className="text-sm font-semibold">Submit now? You cannot change your scores afterwards.</span>

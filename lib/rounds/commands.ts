@@ -1,4 +1,5 @@
 import { Op } from 'sequelize';
+import { INCOMPLETE_SCORECARD, scorecardGaps } from './scorecard-complete';
 import { badRequest, conflict, notFound } from '@/lib/api/errors';
 import { recordEvent } from '@/lib/audit/record';
 import {
@@ -170,22 +171,8 @@ export async function saveScorecard(
     seen.add(r.mechanismId);
   });
   if (input.submit) {
-    const byId = new Map(input.ratings.map((r) => [r.mechanismId, r]));
-    const issues = mechanisms.flatMap((m) => {
-      const r = byId.get(m.id);
-      const out: { path: string; message: string }[] = [];
-      if (r?.band === null || r?.band === undefined)
-        out.push({ path: `mechanism.${m.id}.band`, message: `Rate the likelihood of “${m.name}”.` });
-      if (!r?.contribution)
-        out.push({ path: `mechanism.${m.id}.contribution`, message: `Choose the contribution of “${m.name}”.` });
-      return out;
-    });
-    if (!input.signOff) issues.push({ path: 'signOff', message: 'Choose your sign-off.' });
-    if (issues.length)
-      throw badRequest(
-        'Complete the scorecard before submitting: every mechanism needs a likelihood and a contribution, and the scorecard a sign-off.',
-        issues,
-      );
+    const issues = scorecardGaps(mechanisms, input);
+    if (issues.length) throw badRequest(INCOMPLETE_SCORECARD, issues);
   }
   const ratings: StoredRating[] = input.ratings.map((r) => ({
     mechanismId: r.mechanismId,
