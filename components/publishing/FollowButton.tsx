@@ -45,8 +45,9 @@ export function FollowButton({
         disabled={busy}
         aria-pressed={following}
       >
-        {following ? `Following ${teamName}` : `Follow ${teamName} by e-mail`}
+        {following ? `Following ${teamName} ✓` : `Follow ${teamName} by e-mail`}
       </Button>
+      {following && <p className="text-ink-muted text-xs">Click again to stop following: no more e-mails.</p>}
       <p aria-live="polite" className="text-ink-muted text-sm">
         {message}
       </p>

@@ -8,6 +8,7 @@ import { Button } from '@/components/ui/Button';
 import { CheckboxField, SelectField, TextAreaField, TextField } from '@/components/ui/Field';
 import type { Desirable } from '@/lib/scoring/direction';
 import { DesirableField } from './DesirableField';
+import { weeklySecondsFromProtocol } from './time-under-load';
 import { FormMessage } from '@/components/ui/FormMessage';
 import { Spinner } from '@/components/ui/Spinner';
 import { convertLoad } from '@/lib/reviews/protocol';
@@ -24,7 +25,7 @@ import { ApiError, apiFetch, errorMessage } from '@/lib/swr/fetcher';
 import { isReviewListKey } from '@/lib/swr/keys';
 import { createReviewSchema, updateReviewSchema } from '@/lib/validation/reviews';
 import { focusFirstInvalid, issuesToErrors, withoutFieldError } from '@/components/ui/form-errors';
-import { EFFORT_LABEL, LOAD_UNIT_HELP, LOAD_UNIT_LABEL, percent, TRAINING_STATUS_LABEL } from './labels';
+import { duration, EFFORT_LABEL, LOAD_UNIT_HELP, LOAD_UNIT_LABEL, percent, TRAINING_STATUS_LABEL } from './labels';
 
 const BODYWEIGHT_UNITS: readonly LoadUnit[] = ['percent-bodyweight', 'kg-added'];
 
@@ -191,6 +192,7 @@ export function ClaimForm({
       ? convertLoad(body.protocol)
       : null;
   const bodyweightUnit = draft.loadUnit !== '' && BODYWEIGHT_UNITS.includes(draft.loadUnit);
+  const weeklySeconds = weeklySecondsFromProtocol(body.protocol);
 
   const submit = async (event: FormEvent) => {
     event.preventDefault();
@@ -355,6 +357,11 @@ export function ClaimForm({
                 ? `Intensity ${percent(conversion.intensity)} of maximum. ${conversion.explanation}`
                 : conversion.explanation
               : 'Enter a load and its unit to see the intensity on the common scale.'}
+          </p>
+          <p className="text-ink-muted text-sm" aria-live="polite" data-testid="claim-time-under-load">
+            {weeklySeconds !== null
+              ? `Time under load: ${duration(weeklySeconds)} a week.`
+              : 'Enter seconds per set, sets per session and sessions per day to see the time under load per week.'}
           </p>
           <div className="grid grid-cols-2 gap-4 lg:grid-cols-3">
             {SCHEDULE_FIELDS.map((f) => (

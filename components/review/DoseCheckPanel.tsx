@@ -7,6 +7,7 @@ import { EFFORT_SCALE } from '@/lib/scoring/constants';
 import { formatNumber } from '@/lib/scoring/format';
 import type { VerdictDTO } from '@/lib/reviews/types';
 import { duration, EFFORT_LABEL, percent } from './labels';
+import { plural, weeklySecondsFromProtocol } from './time-under-load';
 
 type Check = 'meets' | 'short' | 'no-minimum' | 'unknown';
 
@@ -162,11 +163,12 @@ export function DoseCheckPanel({
           <div className="bg-paper-sunken/70 rounded-md px-4 py-3">
             <dt className="text-ink-muted text-sm">Time under load per week</dt>
             <dd className="text-lg font-semibold tabular-nums" data-testid="weekly-time-under-load">
-              {dose ? duration(dose.weeklySecondsUnderLoad) : '—'}
+              {dose ? duration(dose.weeklySecondsUnderLoad) : duration(weeklySecondsFromProtocol(protocol))}
             </dd>
             <dd className="text-ink-muted text-xs">
               {protocol.secondsPerSet ?? '?'} s × {protocol.setsPerSession ?? '?'} sets ×{' '}
-              {protocol.sessionsPerDay ?? '?'} sessions × {protocol.daysPerWeek ?? 7} days
+              {protocol.sessionsPerDay === null ? '? sessions' : plural(protocol.sessionsPerDay, 'session')} ×{' '}
+              {plural(protocol.daysPerWeek ?? 7, 'day')}
             </dd>
           </div>
           <div className="bg-paper-sunken/70 rounded-md px-4 py-3">
@@ -182,7 +184,7 @@ export function DoseCheckPanel({
             </dd>
             <dd className="text-ink-muted text-xs">
               {dose?.spacing
-                ? `${protocol.sessionsPerDay ?? 1} sessions with ${protocol.minHoursBetween ?? 0} h between them need ${formatNumber(dose.spacing.hoursNeeded, 1)} h of a 16-hour waking day.`
+                ? `${plural(protocol.sessionsPerDay ?? 1, 'session')} with ${protocol.minHoursBetween ?? 0} h between them need ${formatNumber(dose.spacing.hoursNeeded, 1)} h of a 16-hour waking day.`
                 : 'Needs sessions per day and the minimum hours between them.'}
             </dd>
           </div>

@@ -111,10 +111,16 @@ export function RecommendationsPanel({
                 errors={errors[f.key] ?? errors[`recommendations.${f.key}`]}
               />
             ))}
-            <Button type="submit" disabled={busy || !changed} aria-busy={busy || undefined}>
-              {busy && <Spinner />}
-              Save recommendations
-            </Button>
+            <div className="flex flex-wrap items-center gap-3">
+              <Button type="submit" disabled={busy || !changed} aria-busy={busy || undefined}>
+                {busy && <Spinner />}
+                Save recommendations
+              </Button>
+              {/* Beside the button, where the eye is after clicking: a greyed button alone says nothing. */}
+              <span role="status" className="text-success-700 text-sm font-semibold" data-testid="recommendations-saved">
+                {state.ok && !changed ? '✓ Saved' : !changed ? '' : 'Unsaved changes'}
+              </span>
+            </div>
           </form>
         ) : (
           <dl className="space-y-3 text-sm">
