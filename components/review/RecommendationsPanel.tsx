@@ -117,7 +117,11 @@ export function RecommendationsPanel({
                 Save recommendations
               </Button>
               {/* Beside the button, where the eye is after clicking: a greyed button alone says nothing. */}
-              <span role="status" className="text-success-700 text-sm font-semibold" data-testid="recommendations-saved">
+              <span
+                role="status"
+                className={changed ? 'text-ink-muted text-sm' : 'text-success-700 text-sm font-semibold'}
+                data-testid="recommendations-saved"
+              >
                 {state.ok && !changed ? '✓ Saved' : !changed ? '' : 'Unsaved changes'}
               </span>
             </div>

@@ -23,6 +23,7 @@ import { useReviewMutations } from '@/lib/swr/use-review-mutations';
 import { useVerdict } from '@/lib/swr/use-verdict';
 import { useWorkbench } from '@/lib/swr/use-workbench';
 import { PublishPanel } from '@/components/publishing/PublishPanel';
+import { priorShift } from './prior-shift';
 import { RoundStatusBadge } from '@/components/rounds/RoundStatusBadge';
 import { useReviewFrozen } from '@/components/rounds/use-rounds';
 import { SimilarReviews } from '@/components/search/SimilarReviews';
@@ -535,6 +536,9 @@ function MechanismCard({
             {score ? (
               <>
                 <strong className="text-ink tabular-nums">{percent(score.probability)}</strong> · {score.term}
+                <span className="block text-xs" data-testid="prior-shift">
+                  {priorShift({ prior: mechanism.prior, logOdds: score.logOdds, dosePenalty: score.dosePenalty, appraised: appraisals.length })}
+                </span>
               </>
             ) : (
               'Not scored yet'
