@@ -10,7 +10,12 @@ export function ReferenceList({ references, downloadBase }: { references: Snapsh
     <div className="space-y-4">
       <ol className="space-y-3">
         {references.map((r) => (
-          <li key={r.studyId} id={`ref-${r.studyId}`} className="break-inside-avoid pl-6 -indent-6">
+          <li
+            key={r.studyId}
+            id={`ref-${r.studyId}`}
+            // The reference a citation jumps to stands out (no script: the page has none).
+            className="target:bg-rope-50 target:outline-rope-500 scroll-mt-6 break-inside-avoid rounded-sm pl-6 -indent-6 target:outline target:outline-2 target:outline-offset-2"
+          >
             <div
               className="[&_a]:text-brand [&_a]:break-all [&_a]:underline [&_a]:decoration-2 [&_div]:inline"
               dangerouslySetInnerHTML={{ __html: r.apaHtml }}
