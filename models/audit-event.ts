@@ -1,17 +1,8 @@
-import {
-  DataTypes,
-  Model,
-  type CreationOptional,
-  type InferAttributes,
-  type InferCreationAttributes,
-} from 'sequelize';
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes } from 'sequelize';
 import { db } from '@/lib/db';
 
 /** Who did what, when: an append-only log the owner can read. */
-export class AuditEvent extends Model<
-  InferAttributes<AuditEvent>,
-  InferCreationAttributes<AuditEvent>
-> {
+export class AuditEvent extends Model<InferAttributes<AuditEvent>, InferCreationAttributes<AuditEvent>> {
   declare id: CreationOptional<number>;
   declare teamId: number | null;
   declare actorId: number | null;

@@ -1,18 +1,9 @@
-import {
-  DataTypes,
-  Model,
-  type CreationOptional,
-  type InferAttributes,
-  type InferCreationAttributes,
-} from 'sequelize';
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes } from 'sequelize';
 import { db } from '@/lib/db';
 import { ROLES, type Role } from './roles';
 
 /** An e-mailed offer to join a team. Only the token's hash is stored. */
-export class Invitation extends Model<
-  InferAttributes<Invitation>,
-  InferCreationAttributes<Invitation>
-> {
+export class Invitation extends Model<InferAttributes<Invitation>, InferCreationAttributes<Invitation>> {
   declare id: CreationOptional<number>;
   declare teamId: number;
   declare email: string;

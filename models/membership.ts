@@ -1,17 +1,8 @@
-import {
-  DataTypes,
-  Model,
-  type CreationOptional,
-  type InferAttributes,
-  type InferCreationAttributes,
-} from 'sequelize';
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes } from 'sequelize';
 import { db } from '@/lib/db';
 import { ROLES, type Role } from './roles';
 
-export class Membership extends Model<
-  InferAttributes<Membership>,
-  InferCreationAttributes<Membership>
-> {
+export class Membership extends Model<InferAttributes<Membership>, InferCreationAttributes<Membership>> {
   declare id: CreationOptional<number>;
   declare teamId: number;
   declare userId: number;

@@ -68,7 +68,8 @@ PublishedVersion.init(
     createdAt: DataTypes.DATE,
   },
   {
-    sequelize: db(), modelName: 'PublishedVersion',
+    sequelize: db(),
+    modelName: 'PublishedVersion',
     tableName: 'published_versions',
     updatedAt: false,
     // A version is written once; refusing updates here backs the rule up in code.

@@ -1,10 +1,4 @@
-import {
-  DataTypes,
-  Model,
-  type CreationOptional,
-  type InferAttributes,
-  type InferCreationAttributes,
-} from 'sequelize';
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes } from 'sequelize';
 import { db } from '@/lib/db';
 
 export class User extends Model<InferAttributes<User>, InferCreationAttributes<User>> {
@@ -33,7 +27,8 @@ User.init(
     updatedAt: DataTypes.DATE,
   },
   {
-    sequelize: db(), modelName: 'User',
+    sequelize: db(),
+    modelName: 'User',
     tableName: 'users',
     // The hash must never reach a response: it is only loaded where a password is checked.
     defaultScope: { attributes: { exclude: ['passwordHash'] } },

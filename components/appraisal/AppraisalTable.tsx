@@ -83,7 +83,11 @@ export function AppraisalTable({
                   {study?.effect && <span className="text-granite-700 mt-0.5 block text-xs">Has an effect size</span>}
                 </th>
                 <td className="py-2.5 pr-3">{study?.design ? DESIGN_LABEL[study.design] : '—'}</td>
-                <td className="py-2.5 pr-3 font-semibold" data-testid="appraisal-certainty" data-certainty={a.certainty}>
+                <td
+                  className="py-2.5 pr-3 font-semibold"
+                  data-testid="appraisal-certainty"
+                  data-certainty={a.certainty}
+                >
                   {CERTAINTY_LABEL[a.certainty]}
                   {a.needsCheck && (
                     <span className="mt-1 block font-normal">

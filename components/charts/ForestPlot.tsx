@@ -116,7 +116,10 @@ export function ForestPlot({
   const description =
     `${rows.length} studies. ` +
     rows
-      .map((r) => `${r.label}: ${num(r.effectSize)} (95 % CI ${num(r.ciLow)} to ${num(r.ciHigh)}), weight ${num(r.weight)} %.`)
+      .map(
+        (r) =>
+          `${r.label}: ${num(r.effectSize)} (95 % CI ${num(r.ciLow)} to ${num(r.ciHigh)}), weight ${num(r.weight)} %.`,
+      )
       .join(' ') +
     (pooled ? ` Pooled: ${num(pooled.estimate)} (95 % CI ${num(pooled.ciLow)} to ${num(pooled.ciHigh)}).` : '') +
     (predictionInterval

@@ -2,7 +2,6 @@ import { Logo } from './Logo';
 import { NavLinks, type NavItem } from './NavLinks';
 import { SignOutButton } from './SignOutButton';
 
-
 /** The signed-in header: sections on the left, who is signed in and the way out on the right. */
 export function AppHeader({ user, nav }: { user: { name: string; email: string }; nav: readonly NavItem[] }) {
   return (

@@ -391,7 +391,10 @@ export function ClaimForm({
           />
         </Section>
 
-        <Section title="The claimed outcome" description="What the claim promises, measured the way studies measure it.">
+        <Section
+          title="The claimed outcome"
+          description="What the claim promises, measured the way studies measure it."
+        >
           <DesirableField
             label="Which way is the claimed effect?"
             {...field('outcomeDesirable')}

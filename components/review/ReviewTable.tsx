@@ -24,7 +24,6 @@ const COLUMNS: { key: SortKey; label: string }[] = [
   { key: 'authorName', label: 'Author' },
 ];
 
-
 // Sort in the order the workflow runs, not alphabetically.
 const statusRank = (s: ReviewSummaryDTO) => REVIEW_STATUSES.indexOf(s.status);
 const verdictRank = (s: ReviewSummaryDTO) => (s.verdict ? VERDICT_KEYS.indexOf(s.verdict) : -1);

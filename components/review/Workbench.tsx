@@ -537,7 +537,12 @@ function MechanismCard({
               <>
                 <strong className="text-ink tabular-nums">{percent(score.probability)}</strong> · {score.term}
                 <span className="block text-xs" data-testid="prior-shift">
-                  {priorShift({ prior: mechanism.prior, logOdds: score.logOdds, dosePenalty: score.dosePenalty, appraised: appraisals.length })}
+                  {priorShift({
+                    prior: mechanism.prior,
+                    logOdds: score.logOdds,
+                    dosePenalty: score.dosePenalty,
+                    appraised: appraisals.length,
+                  })}
                 </span>
               </>
             ) : (

@@ -29,7 +29,9 @@ export function CloseRoundForm({
 
   const close = async () => {
     // Closing settles the round for good: scorecards can no longer change and the review's status moves.
-    if (!window.confirm('Close this round? Scorecards can no longer be submitted or changed, and this cannot be undone.'))
+    if (
+      !window.confirm('Close this round? Scorecards can no longer be submitted or changed, and this cannot be undone.')
+    )
       return;
     setBusy(true);
     setError(null);

@@ -26,8 +26,8 @@ export function EffectConflictWarning({ check }: { check: EffectCheckDTO | null 
         <path d="M8 6v4M8 11.5v1" stroke="currentColor" strokeWidth="1.6" strokeLinecap="round" />
       </svg>
       <p>
-        <strong>The pooled effect disagrees with this probability.</strong> The {check.k} studies with effect sizes
-        pool to {n(check.pooled.estimate)} [{n(check.pooled.ciLow)}, {n(check.pooled.ciHigh)}], which{' '}
+        <strong>The pooled effect disagrees with this probability.</strong> The {check.k} studies with effect sizes pool
+        to {n(check.pooled.estimate)} [{n(check.pooled.ciLow)}, {n(check.pooled.ciHigh)}], which{' '}
         {DIRECTION_WORDS[check.direction]}. Check each appraisal’s direction and which way the claimed outcome is
         better.
       </p>

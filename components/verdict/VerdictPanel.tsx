@@ -13,7 +13,6 @@ import { EffectConflictWarning } from './EffectConflictWarning';
 import { LikelihoodScale } from './LikelihoodScale';
 import { VerdictChip } from './VerdictChip';
 
-
 /** What each verdict means, in a sentence a coach can repeat to an athlete. */
 const VERDICT_MEANING: Record<VerdictKey, string> = {
   insufficient: `Too little appraised evidence to call it yet (evidence weight below ${MIN_EVIDENCE_WEIGHT}). Appraise more studies.`,

@@ -343,7 +343,8 @@ export const DEMO_REVIEWS: DemoReview[] = [
         doi: '10.5555/hjts.2023.0402',
         mechanism: 'pain',
         direction: 'supports',
-        directionReason: 'Pain on loading, reported separately, fell; the combined score with confidence did not move clearly.',
+        directionReason:
+          'Pain on loading, reported separately, fell; the combined score with confidence did not move clearly.',
         notes: 'Pain on loading fell over six weeks.',
       },
     ],
@@ -482,7 +483,8 @@ export const DEMO_REVIEWS: DemoReview[] = [
         mechanism: 'quality',
         direction: 'against',
         imprecision: 'serious',
-        directionReason: 'The effect here is the strength gain; the next-session volume and bar speed it also reports did not differ.',
+        directionReason:
+          'The effect here is the strength gain; the next-session volume and bar speed it also reports did not differ.',
         notes: 'Session volume and bar speed were the same in both groups.',
       },
       {
@@ -613,7 +615,8 @@ export const DEMO_REVIEWS: DemoReview[] = [
         mechanism: 'hypertrophy',
         direction: 'against',
         riskOfBias: 'serious',
-        directionReason: 'The effect recorded is pulling force; muscle thickness, the measure of this mechanism, did not change.',
+        directionReason:
+          'The effect recorded is pulling force; muscle thickness, the measure of this mechanism, did not change.',
         notes: 'No change in muscle thickness over six weeks.',
       },
       {

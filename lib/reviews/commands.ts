@@ -263,7 +263,9 @@ async function checkDirectionReason(
   transaction: Transaction,
 ) {
   const mechanism =
-    value.mechanismId === null ? null : await Mechanism.findByPk(value.mechanismId, { transaction, attributes: ['desirable'] });
+    value.mechanismId === null
+      ? null
+      : await Mechanism.findByPk(value.mechanismId, { transaction, attributes: ['desirable'] });
   const suggested = suggestedDirectionFor(study.effect, targetDesirable(mechanism, review.outcomeDesirable));
   const issue = directionReasonIssue({ ...value, suggested });
   if (issue) throw badRequest(issue.message, [issue]);

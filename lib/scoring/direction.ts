@@ -36,7 +36,8 @@ export function orientEffect(y: number, desirable: Desirable = 'higher'): number
 export function suggestDirection(input: { y: number; v: number; desirable?: Desirable }): SuggestedDirection {
   const { y, v, desirable = 'higher' } = input;
   if (!Number.isFinite(y)) throw new ScoringInputError('y', `the effect size must be a finite number, got ${y}`);
-  if (!Number.isFinite(v) || v <= 0) throw new ScoringInputError('v', `the variance must be above 0 and finite, got ${v}`);
+  if (!Number.isFinite(v) || v <= 0)
+    throw new ScoringInputError('v', `the variance must be above 0 and finite, got ${v}`);
   const oriented = orientEffect(y, desirable);
   const half = Z95 * Math.sqrt(v);
   if (oriented - half > 0) return 'supports';

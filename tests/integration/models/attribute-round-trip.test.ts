@@ -15,7 +15,8 @@ import { useTestApp } from '../../helpers/app';
 useTestApp();
 
 const all = (Object.values(models) as unknown[]).filter(
-  (m): m is ModelStatic<Model> => typeof m === 'function' && typeof (m as ModelStatic<Model>).getAttributes === 'function',
+  (m): m is ModelStatic<Model> =>
+    typeof m === 'function' && typeof (m as ModelStatic<Model>).getAttributes === 'function',
 );
 
 type Attr = ReturnType<ModelStatic<Model>['getAttributes']>[string];
@@ -83,7 +84,9 @@ describe('every model stores each attribute in its own column', () => {
         ];
         for (const [name, attr] of attributes) {
           if (name === 'updatedAt' || name === 'createdAt') continue;
-          expect(comparable(back[name]), `${model.name}.${name} read through the model`).toEqual(comparable(values[name]));
+          expect(comparable(back[name]), `${model.name}.${name} read through the model`).toEqual(
+            comparable(values[name]),
+          );
           expect(raw, `${model.name} has a column for ${name}`).toHaveProperty(attr.field ?? name);
           expect(attr.field ?? name, `${model.name}.${name} maps to its own column`).toBe(name);
         }

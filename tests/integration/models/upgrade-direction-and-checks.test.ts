@@ -50,7 +50,9 @@ describe('migration 20261202-01-direction-and-checks', () => {
         ...stamp,
       },
     ]);
-    await q.bulkInsert('appraisals', [{ id: 1, reviewId: 1, studyId: 1, mechanismId: null, direction: 'supports', ...stamp }]);
+    await q.bulkInsert('appraisals', [
+      { id: 1, reviewId: 1, studyId: 1, mechanismId: null, direction: 'supports', ...stamp },
+    ]);
 
     await umzug.up();
 
@@ -65,10 +67,9 @@ describe('migration 20261202-01-direction-and-checks', () => {
     ];
     expect(JSON.parse(studies[0].effect)).toEqual({ kind: 'ready', effectSize: 0.31, variance: 0.02, measure: 'smd' });
     expect(JSON.parse(studies[1].effect)).toEqual({ kind: 't', t: 2, n1: 10, n2: 10 });
-    const [[review]] = (await db().query("SELECT dflt_value FROM pragma_table_info('reviews') WHERE name = 'outcomeDesirable'")) as [
-      { dflt_value: string }[],
-      unknown,
-    ];
+    const [[review]] = (await db().query(
+      "SELECT dflt_value FROM pragma_table_info('reviews') WHERE name = 'outcomeDesirable'",
+    )) as [{ dflt_value: string }[], unknown];
     expect(review.dflt_value).toContain('higher');
   });
 });

@@ -23,7 +23,15 @@ const params = (extra: Record<string, string> = {}) => ({ id: String(reviewId), 
 
 async function study(title: string, effect: Record<string, unknown> | null): Promise<number> {
   const res = await t.coach.call(studies.POST, {
-    json: { teamId: t.teamId, title, year: 2024, design: 'randomized', population: 'recreational', intensity: 0.8, effect },
+    json: {
+      teamId: t.teamId,
+      title,
+      year: 2024,
+      design: 'randomized',
+      population: 'recreational',
+      intensity: 0.8,
+      effect,
+    },
   });
   if (res.status !== 201) throw new Error(JSON.stringify(res.body));
   return res.body.studies[0].id;
@@ -123,7 +131,12 @@ describe('direction from effects (docs/scoring.md §10)', () => {
 
     const withReason = await t.coach.call(appraisals.POST, {
       params: params(),
-      json: { studyId: painDrop, mechanismId: null, direction: 'against', directionReason: 'The control group got rest.' },
+      json: {
+        studyId: painDrop,
+        mechanismId: null,
+        direction: 'against',
+        directionReason: 'The control group got rest.',
+      },
     });
     expect(withReason.status).toBe(201);
     expect(withReason.body.appraisal.directionReason).toBe('The control group got rest.');

@@ -47,8 +47,8 @@ describe('comparable effect sizes', () => {
     });
     const or = comparableEffect({ kind: 'ready', effectSize: Math.log(3), variance: 0.2, measure: 'log-odds-ratio' });
     expect(or.effectSize).toBeCloseTo(Math.log(3) * (Math.sqrt(3) / Math.PI), 12);
-    expect(comparableEffect({ kind: 'ready', effectSize: -0.2, variance: 0.01, measure: 'log-risk-ratio' }).measure).toBe(
-      'log-risk-ratio',
-    );
+    expect(
+      comparableEffect({ kind: 'ready', effectSize: -0.2, variance: 0.01, measure: 'log-risk-ratio' }).measure,
+    ).toBe('log-risk-ratio');
   });
 });

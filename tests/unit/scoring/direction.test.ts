@@ -44,7 +44,9 @@ describe('suggestDirection', () => {
 
 describe('effectConflict', () => {
   it('the example: pooled 0.05 [−0.22, 0.33] with P 0.90 → conflict', () => {
-    expect(effectConflict({ pooled: { estimate: 0.05, ciLow: -0.22, ciHigh: 0.33 }, outcomeProbability: 0.9 })).toBe(true);
+    expect(effectConflict({ pooled: { estimate: 0.05, ciLow: -0.22, ciHigh: 0.33 }, outcomeProbability: 0.9 })).toBe(
+      true,
+    );
   });
   it('neutral pooled: conflict from P ≥ 0.66', () => {
     const pooled = { estimate: 0.05, ciLow: -0.22, ciHigh: 0.33 };
@@ -63,8 +65,8 @@ describe('effectConflict', () => {
     expect(effectConflict({ pooled, outcomeProbability: 0.9 })).toBe(false);
   });
   it('refuses a probability outside 0..1', () => {
-    expect(() =>
-      effectConflict({ pooled: { estimate: 0, ciLow: -1, ciHigh: 1 }, outcomeProbability: 1.2 }),
-    ).toThrow(ScoringInputError);
+    expect(() => effectConflict({ pooled: { estimate: 0, ciLow: -1, ciHigh: 1 }, outcomeProbability: 1.2 })).toThrow(
+      ScoringInputError,
+    );
   });
 });
