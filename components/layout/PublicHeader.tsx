@@ -20,10 +20,13 @@ export function PublicHeader({ signedIn }: { signedIn: boolean }) {
               <LinkButton href="/sign-in" variant="ghost" size="sm">
                 Sign in
               </LinkButton>
-              {/* Phones get this from the page itself; the header row has room for one button. */}
-              <LinkButton href="/sign-up" variant="primary" size="sm" className="hidden sm:inline-flex">
-                Create account
-              </LinkButton>
+              {/* Phones get this from the page itself; the header row has room for one button. The
+                  wrapper hides it: on the button itself, its own inline-flex wins over `hidden`. */}
+              <span className="hidden sm:inline-flex">
+                <LinkButton href="/sign-up" variant="primary" size="sm">
+                  Create account
+                </LinkButton>
+              </span>
             </>
           )}
         </nav>

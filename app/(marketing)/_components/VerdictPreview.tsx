@@ -1,4 +1,4 @@
-import { Badge } from '@/components/ui/Badge';
+import { VerdictChip } from '@/components/verdict/VerdictChip';
 
 // An invented example (PRODUCT.md demo scenario), so a visitor sees the kind of page athletes get.
 const MECHANISMS = [
@@ -20,7 +20,7 @@ export function VerdictPreview() {
     >
       <div className="flex flex-wrap items-center justify-between gap-2">
         <p className="text-ink-muted text-xs font-semibold tracking-wide uppercase">Example verdict · invented</p>
-        <Badge tone="danger">Does not hold up</Badge>
+        <VerdictChip verdict="not-supported" label="Does not hold up" />
       </div>
       <blockquote className="font-display text-ink mt-3 text-xl leading-snug font-semibold">
         “Four daily sets of light pinch-block lifts stiffen thumb tendons in three weeks.”
