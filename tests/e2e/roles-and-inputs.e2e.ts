@@ -1,6 +1,6 @@
 import type { BrowserContext, Page } from 'playwright-core';
-import sqlite3 from 'sqlite3';
-import { describe, expect, inject, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
+import { markApproved } from './approve';
 import { useBrowser } from './browser';
 
 /**
@@ -22,19 +22,6 @@ async function signedIn(email: string, viewport?: { width: number; height: numbe
   const page: Page = await context.newPage();
   page.setDefaultTimeout(60_000);
   return { context, page };
-}
-
-/** Stands in for a closed peer-review round: the review becomes "approved" so it may be published. */
-function markApproved(reviewId: number): Promise<void> {
-  return new Promise((resolve, reject) => {
-    const database = new sqlite3.Database(inject('databaseFile'));
-    database.configure('busyTimeout', 5000);
-    database.run("UPDATE reviews SET status = 'approved' WHERE id = ?", [reviewId], (err) => {
-      database.close();
-      if (err) reject(err);
-      else resolve();
-    });
-  });
 }
 
 const protocol = {

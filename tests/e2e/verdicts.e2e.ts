@@ -1,7 +1,7 @@
 import axe from 'axe-core';
 import type { Page } from 'playwright-core';
-import sqlite3 from 'sqlite3';
-import { describe, expect, inject, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
+import { markApproved } from './approve';
 import { linkFrom, useBrowser, waitForMail } from './browser';
 
 const browser = useBrowser();
@@ -16,19 +16,6 @@ async function signIn(page: Page, email: string) {
   await page.fill('input[name=password]', DEMO_PASSWORD);
   await page.getByRole('button', { name: 'Sign in' }).click();
   await page.waitForURL('**/dashboard');
-}
-
-/** Stands in for a closed peer-review round (issue 5's module): the review becomes "approved". */
-function markApproved(reviewId: number): Promise<void> {
-  return new Promise((resolve, reject) => {
-    const database = new sqlite3.Database(inject('databaseFile'));
-    database.configure('busyTimeout', 5000);
-    database.run("UPDATE reviews SET status = 'approved' WHERE id = ?", [reviewId], (err) => {
-      database.close();
-      if (err) reject(err);
-      else resolve();
-    });
-  });
 }
 
 async function seriousAxeViolations(page: Page) {
