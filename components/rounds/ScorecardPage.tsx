@@ -430,7 +430,7 @@ function EvidenceList({
           <li key={a.id} className="border-line rounded-md border px-3 py-2 text-sm">
             <p>
               <span className="font-semibold">{s?.citation ?? 'Unknown study'}</span>{' '}
-              <Badge tone={a.direction === 'supports' ? 'success' : a.direction === 'against' ? 'danger' : 'neutral'}>
+              <Badge tone={a.direction === 'supports' ? 'brand' : a.direction === 'against' ? 'accent' : 'neutral'}>
                 {DIRECTION_WORD[a.direction] ?? a.direction}
               </Badge>
             </p>
@@ -447,6 +447,9 @@ function EvidenceList({
               {concerns.length ? `Author’s concerns: ${concerns.join('; ')}` : 'No certainty concerns recorded.'}
             </p>
             {a.notes && <p className="mt-1">{a.notes}</p>}
+            {a.directionReason && (
+              <p className="mt-1">Direction differs from the study’s effect because: {a.directionReason}</p>
+            )}
           </li>
         );
       })}

@@ -243,6 +243,7 @@ export async function scorecardView(
     imprecision: a.imprecision,
     publicationBias: a.publicationBias,
     notes: a.notes,
+    directionReason: a.directionReason ?? null,
   }));
   return {
     round: await roundDTO(round, actor, access),

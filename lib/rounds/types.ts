@@ -114,6 +114,8 @@ export interface BlindAppraisalDTO {
   imprecision: string;
   publicationBias: string;
   notes: string;
+  /** Why the direction differs from the one the study's effect suggests (docs/scoring.md §10). */
+  directionReason: string | null;
 }
 
 /** GET /api/reviews/:id/rounds/:roundId/scorecard — everything the reviewer scores from, blind. */
