@@ -86,6 +86,8 @@ describe('GET /api/reviews/:id/verdict', () => {
     expect(Object.keys(v).sort()).toEqual([
       'appraisals',
       'dose',
+      // The pooled outcome effect against the probability (docs/scoring.md §10); null here, no effect sizes.
+      'effectCheck',
       'evidenceWeight',
       'label',
       'mechanisms',
