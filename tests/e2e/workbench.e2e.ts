@@ -123,6 +123,9 @@ describe('a coach takes a claim apart in the workbench', () => {
       await dialog.getByRole('option').first().waitFor();
       await dialog.getByRole('combobox', { name: /study/i }).press('Enter');
       await dialog.locator('input[name=direction][value=supports]').check();
+      // A direction the study's effect does not suggest asks for a reason (docs/scoring.md §10).
+      const reason = dialog.locator('textarea[name=directionReason]');
+      if (await reason.count()) await reason.fill('A small trial; the direction matches the larger one.');
       const before = await dialog.getByTestId('certainty-level').textContent();
       for (const [k, v] of Object.entries(domains)) await dialog.locator(`select[name=${k}]`).selectOption(v);
       // Certainty is recomputed live as the domains change.
