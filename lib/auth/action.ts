@@ -1,6 +1,7 @@
 import { headers } from 'next/headers';
 import type { z } from 'zod';
 import { AppError } from '@/lib/api/errors';
+import { busyError } from '@/lib/api/respond';
 import { loadActor } from './actor';
 import { authorize, requireActor } from './authorize';
 import { currentSession } from './current';
@@ -31,10 +32,7 @@ export interface ActionContext {
  * @example
  * export const inviteAction = formAction(inviteSchema, async (data, { authorize }) => { ... });
  */
-export function formAction<T>(
-  schema: z.ZodType<T>,
-  fn: (data: T, ctx: ActionContext) => Promise<FormState | void>,
-) {
+export function formAction<T>(schema: z.ZodType<T>, fn: (data: T, ctx: ActionContext) => Promise<FormState | void>) {
   return async (_previous: FormState, formData: FormData): Promise<FormState> => {
     const values = textFields(formData);
     const parsed = schema.safeParse(values);
@@ -59,7 +57,8 @@ export function formAction<T>(
           signedIn: () => requireActor(actor),
         })) ?? { ok: true }
       );
-    } catch (error) {
+    } catch (thrown) {
+      const error = busyError(thrown) ?? thrown;
       if (error instanceof AppError) {
         // A domain error that names its field ("Already a member") shows under that field too.
         const errors: Record<string, string[]> = {};
