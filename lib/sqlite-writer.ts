@@ -24,7 +24,6 @@ const READ_TYPES = new Set<string>([
   QueryTypes.SHOWINDEXES,
   QueryTypes.DESCRIBE,
   QueryTypes.FOREIGNKEYS,
-  QueryTypes.SHOWCONSTRAINTS,
 ]);
 
 /** Whether a statement run outside a transaction may write (and so takes the writer's turn). */
@@ -112,8 +111,9 @@ export function serialiseWrites(sequelize: Sequelize, queue = new WriteQueue()):
     return queue.run(() => query(sql, options));
   };
 
-  target.transaction = async (optionsOrFn?: object | ((t: Transaction) => Promise<unknown>), maybeFn?) => {
-    const autoCallback = typeof optionsOrFn === 'function' ? optionsOrFn : maybeFn;
+  type Callback = (t: Transaction) => Promise<unknown>;
+  target.transaction = async (optionsOrFn?: object | Callback, maybeFn?: Callback) => {
+    const autoCallback = typeof optionsOrFn === 'function' ? (optionsOrFn as Callback) : maybeFn;
     const options = { type: Transaction.TYPES.IMMEDIATE, ...(typeof optionsOrFn === 'object' ? optionsOrFn : {}) };
     // A transaction opened by the holder itself cannot wait for its own turn.
     if (queue.heldHere()) return transaction(options, autoCallback);
