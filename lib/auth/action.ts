@@ -3,6 +3,7 @@ import type { z } from 'zod';
 import { AppError } from '@/lib/api/errors';
 import { busyError } from '@/lib/api/respond';
 import { loadActor } from './actor';
+import { forwardedClient } from './client-address';
 import { authorize, requireActor } from './authorize';
 import { currentSession } from './current';
 import type { Action, Actor, Resource } from './policy';
@@ -45,8 +46,8 @@ export function formAction<T>(schema: z.ZodType<T>, fn: (data: T, ctx: ActionCon
       return { errors, values: withoutSecrets(values), message: 'Please correct the highlighted fields.' };
     }
     const session = await currentSession();
-    const actor = await loadActor(session.userId);
-    const address = (await headers()).get('x-forwarded-for')?.split(',')[0]?.trim() || 'local';
+    const actor = await loadActor(session);
+    const address = forwardedClient(await headers());
     try {
       return (
         (await fn(parsed.data, {

@@ -3,6 +3,7 @@ import type { z } from 'zod';
 import { badRequest } from '@/lib/api/errors';
 import { errorResponse, fromZod } from '@/lib/api/respond';
 import { loadActor } from './actor';
+import { forwardedClient } from './client-address';
 import { authorize, requireActor } from './authorize';
 import type { Action, Actor, Resource } from './policy';
 import { sessionOptions, type SessionData } from './session';
@@ -50,7 +51,7 @@ export function route<P = Record<string, never>, B = undefined, Q = Record<strin
     const cookieCarrier = new Response();
     try {
       const session = await getIronSession<SessionData>(req, cookieCarrier, sessionOptions());
-      const actor = await loadActor(session.userId);
+      const actor = await loadActor(session);
       if (options.auth !== 'optional' && !actor) requireActor(actor);
 
       const params = parseWith(options.params, (await context?.params) ?? {});
@@ -92,8 +93,9 @@ async function readJson(req: Request): Promise<unknown> {
   }
 }
 
+/** Resolved by the server from the socket and TRUSTED_PROXIES (lib/auth/client-address.ts). */
 export function clientAddress(req: Request): string {
-  return req.headers.get('x-forwarded-for')?.split(',')[0]?.trim() || req.headers.get('x-real-ip') || 'local';
+  return forwardedClient(req.headers);
 }
 
 function withCookies(response: Response, carrier: Response): Response {
