@@ -64,12 +64,15 @@ export async function listStudies(actor: Actor, query: StudyListQuery): Promise<
     // SQLite's LIKE is case-insensitive for ASCII; the pattern's own % and _ are escaped with \.
     const pattern = db().escape(likePattern(query.q));
     const columns = ['title', 'citation', 'doi', 'journal', 'outcome'];
-    and.push(literal(`(${columns.map((c) => `\`Study\`.\`${c}\` LIKE ${pattern} ESCAPE '\\'`).join(' OR ')})`));
+    // Raw SQL names the table, never the model: a production build renames classes.
+    const matches = columns.map((c) => `${c} LIKE ${pattern} ESCAPE '\\'`).join(' OR ');
+    and.push({ id: { [Op.in]: literal(`(SELECT id FROM studies WHERE ${matches})`) } });
   }
   if (query.tag) {
-    and.push(
-      literal(`EXISTS (SELECT 1 FROM json_each(\`Study\`.\`tags\`) WHERE json_each.value = ${db().escape(query.tag)})`),
-    );
+    const tag = db().escape(query.tag);
+    and.push({
+      id: { [Op.in]: literal(`(SELECT studies.id FROM studies, json_each(studies.tags) WHERE json_each.value = ${tag})`) },
+    });
   }
   const descending = query.sort.startsWith('-');
   const key = query.sort.replace(/^-/, '') as keyof typeof SORT_COLUMNS;
