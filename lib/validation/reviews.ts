@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { idField, idParam } from './ids';
 import { BODYWEIGHT_UNITS, convertLoad, PERCENT_UNITS } from '@/lib/reviews/protocol';
 import {
   EFFORTS,
@@ -15,10 +16,7 @@ import {
  * fields, all optional and without defaults, so a PATCH never resets what it does not mention.
  */
 
-export const idParam = z.coerce
-  .number({ error: 'Must be a number.' })
-  .int({ error: 'Must be a whole number.' })
-  .positive({ error: 'Must be a positive number.' });
+export { idField, idParam } from './ids';
 export const reviewParams = z.object({ id: idParam });
 export const mechanismParams = z.object({ id: idParam, mechanismId: idParam });
 
@@ -307,7 +305,7 @@ const claimUrl = z
 const status = z.enum(REVIEW_STATUSES, { error: `Status must be one of: ${REVIEW_STATUSES.join(', ')}.` });
 
 export const createReviewSchema = z.object({
-  teamId: idParam,
+  teamId: idField,
   title: title.optional(),
   claim,
   claimSource,
