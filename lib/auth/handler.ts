@@ -2,8 +2,10 @@ import { getIronSession, type IronSession } from 'iron-session';
 import type { z } from 'zod';
 import { badRequest } from '@/lib/api/errors';
 import { errorResponse, fromZod } from '@/lib/api/respond';
+import { env } from '@/lib/env';
 import { loadActor } from './actor';
 import { forwardedClient } from './client-address';
+import { assertContentType, crossSiteReason, crossSiteRefusal, hasBody, isSafeMethod } from './same-origin';
 import { authorize, requireActor } from './authorize';
 import type { Action, Actor, Resource } from './policy';
 import { sessionOptions, type SessionData } from './session';
@@ -28,6 +30,8 @@ interface RouteOptions<P, B, Q> {
   query?: z.ZodType<Q>;
   /** 'required' (default) answers 401 before the handler runs when signed out. */
   auth?: 'required' | 'optional';
+  /** The route reads a multipart upload itself (documented in API.md); otherwise bodies are JSON. */
+  multipart?: boolean;
 }
 
 type NextRouteContext = { params: Promise<Record<string, string | string[]>> };
@@ -50,6 +54,11 @@ export function route<P = Record<string, never>, B = undefined, Q = Record<strin
   return async (req: Request, context?: NextRouteContext): Promise<Response> => {
     const cookieCarrier = new Response();
     try {
+      // Before the session is read: another site's request learns nothing and changes nothing.
+      if (crossSiteReason(req.method, req.headers, req.url, env().APP_URL)) throw crossSiteRefusal();
+      if (!isSafeMethod(req.method) && (options.body || options.multipart || hasBody(req.headers))) {
+        assertContentType(req.headers, options.multipart ? 'multipart' : 'json');
+      }
       const session = await getIronSession<SessionData>(req, cookieCarrier, sessionOptions());
       const actor = await loadActor(session);
       if (options.auth !== 'optional' && !actor) requireActor(actor);
