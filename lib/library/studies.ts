@@ -12,6 +12,7 @@ import type { ReferenceInput, StudyListQuery, StudyMetaInput, UpdateStudyInput }
 import { Appraisal, Review, Study } from '@/models';
 import { referenceColumns } from './columns';
 import { storage } from '@/lib/storage';
+import { blindReviewIds } from '@/lib/rounds/freeze';
 import { toStudyDTO } from './dto';
 
 /** Appraisals per study, for the given studies. */
@@ -86,8 +87,13 @@ export async function listStudies(actor: Actor, query: StudyListQuery): Promise<
   return { studies: await studiesDTO(rows), total: count, ...page };
 }
 
-/** GET /api/studies/:id: the study and its appraisals across the team's reviews. */
-export async function studyDetail(study: Study): Promise<StudyDetailDTO> {
+/**
+ * GET /api/studies/:id and the study page: the study and its appraisals across the team's
+ * reviews, as `viewerId` may see them. Blind scoring: a review this person scores blind in an
+ * open round is left out, since its rows carry the engine's certainty and applicability.
+ */
+export async function studyDetail(study: Study, viewerId: number): Promise<StudyDetailDTO> {
+  const blind = await blindReviewIds(viewerId);
   const appraisals = await Appraisal.findAll({
     where: { studyId: study.id },
     order: [
@@ -95,7 +101,7 @@ export async function studyDetail(study: Study): Promise<StudyDetailDTO> {
       ['id', 'ASC'],
     ],
   });
-  const reviewIds = [...new Set(appraisals.map((a) => a.reviewId))];
+  const reviewIds = [...new Set(appraisals.map((a) => a.reviewId))].filter((id) => !blind.has(id));
   const rows: StudyDetailDTO['appraisals'] = [];
   for (const reviewId of reviewIds) {
     // Certainty and applicability depend on the review's protocol and population, so each review is derived on its own.
