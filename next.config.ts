@@ -1,5 +1,6 @@
 import path from 'node:path';
 import type { NextConfig } from 'next';
+import { STRICT_POLICY, staticSecurityHeaders } from './lib/security/headers';
 
 const nextConfig: NextConfig = {
   // Native and Node-only packages stay outside the bundle (Sequelize otherwise pulls in every
@@ -13,6 +14,17 @@ const nextConfig: NextConfig = {
   // The dev server only hydrates for origins it knows; tests and people open it by address too.
   allowedDevOrigins: ['127.0.0.1', 'localhost'],
   poweredByHeader: false,
+  // Security headers on every response; pages with scripts get their nonce policy from proxy.ts.
+  async headers() {
+    const strict = [{ key: 'Content-Security-Policy', value: STRICT_POLICY }];
+    return [
+      { source: '/:path*', headers: staticSecurityHeaders() },
+      { source: '/api/:path*', headers: strict },
+      { source: '/_next/static/:path*', headers: strict },
+      { source: '/v/:slug', headers: strict },
+      { source: '/feed.xml', headers: strict },
+    ];
+  },
   typedRoutes: false,
 };
 

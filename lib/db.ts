@@ -1,6 +1,7 @@
 import path from 'node:path';
 import { Sequelize } from 'sequelize';
 import sqlite3 from 'sqlite3';
+import { serialiseWrites } from './sqlite-writer';
 
 /** Where the SQLite file lives unless DATABASE_URL says otherwise. */
 export const DEFAULT_DATABASE_FILE = 'db/data/loadbearing.sqlite';
@@ -15,8 +16,8 @@ export function databaseFile(url = process.env.DATABASE_URL): string {
 
 /**
  * Every connection Sequelize opens (it opens one per transaction) gets a busy timeout, so a
- * writer waits for another instead of failing with SQLITE_BUSY, and WAL so readers never block
- * writers.
+ * writer from another process (a script) is waited for instead of failing with SQLITE_BUSY, and
+ * WAL so readers never block the writer. Writers of this process queue in lib/sqlite-writer.ts.
  */
 class TunedDatabase extends sqlite3.Database {
   constructor(filename: string, mode?: number, callback?: (err: Error | null) => void) {
@@ -37,13 +38,18 @@ const globalForDb = globalThis as unknown as { loadbearingDb?: Sequelize };
 /** The one Sequelize connection of the process (kept on globalThis so hot reloads reuse it). */
 export function db(): Sequelize {
   if (!globalForDb.loadbearingDb) {
-    globalForDb.loadbearingDb = new Sequelize({
-      dialect: 'sqlite',
-      storage: databaseFile(),
-      dialectModule,
-      logging: false,
-      define: { underscored: false },
-    });
+    globalForDb.loadbearingDb = serialiseWrites(
+      new Sequelize({
+        dialect: 'sqlite',
+        storage: databaseFile(),
+        dialectModule,
+        logging: false,
+        define: { underscored: false },
+        // Writers queue in the process (lib/sqlite-writer.ts); SQLITE_BUSY now only comes from
+        // another process after the busy timeout, and retrying it would hold the request longer.
+        retry: { max: 1 },
+      }),
+    );
   }
   return globalForDb.loadbearingDb;
 }

@@ -13,6 +13,11 @@ const schema = z.object({
   SMTP_PORT: z.coerce.number().int().positive().default(2525),
   MAIL_FROM: z.string().default('Loadbearing <no-reply@loadbearing.test>'),
   MAIL_DROP_DIR: z.string().default('db/data/mail'),
+  /**
+   * Proxies whose `x-forwarded-for` is believed (addresses or CIDR ranges, comma-separated;
+   * lib/auth/client-address.ts). Empty: the socket's address is the client's.
+   */
+  TRUSTED_PROXIES: z.string().default(''),
 });
 
 export type Env = z.infer<typeof schema>;

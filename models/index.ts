@@ -65,3 +65,4 @@ Team.hasMany(Follow, { foreignKey: 'teamId', as: 'follows' });
 Follow.belongsTo(Team, { foreignKey: 'teamId', as: 'team' });
 Follow.belongsTo(User, { foreignKey: 'userId', as: 'user' });
 export { Follow, Publication, PublishedVersion };
+export { SignInThrottle } from './sign-in-throttle';

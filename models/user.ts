@@ -6,6 +6,8 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare name: string;
   declare email: string;
   declare passwordHash: string;
+  /** Bumped to end every session of this person (db/migrations/20261202-02-hardening.ts). */
+  declare sessionGeneration: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -23,6 +25,7 @@ User.init(
       },
     },
     passwordHash: { type: DataTypes.STRING, allowNull: false },
+    sessionGeneration: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,
   },

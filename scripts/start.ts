@@ -1,5 +1,7 @@
 import { createServer } from 'node:http';
+import { resolveClientAddress, trustedProxies } from '../lib/auth/client-address';
 import { withFrontCache } from '../lib/cache/front-cache';
+import { env } from '../lib/env';
 import { loadLocalEnv, migrateDatabase } from './boot';
 
 /**
@@ -18,7 +20,18 @@ async function main() {
   const app = next({ dev: false, dir: process.cwd(), hostname: hostname ?? 'localhost', port });
   await app.prepare();
   const origin = `http://${hostname && hostname !== '0.0.0.0' ? hostname : '127.0.0.1'}:${port}`;
-  const server = createServer(withFrontCache(app.getRequestHandler(), () => origin));
+  const handle = withFrontCache(app.getRequestHandler(), () => origin);
+  // The one x-forwarded-for the app reads: the socket's address, or a trusted proxy's word for it.
+  const proxies = trustedProxies(env().TRUSTED_PROXIES);
+  const server = createServer((req, res) => {
+    req.headers['x-forwarded-for'] = resolveClientAddress(
+      req.socket.remoteAddress,
+      req.headers['x-forwarded-for'],
+      proxies,
+    );
+    delete req.headers['x-real-ip'];
+    return handle(req, res);
+  });
   server.listen(port, hostname, () => console.log(`Loadbearing (production) listening on ${origin}`));
 
   const stop = () => {

@@ -7,6 +7,7 @@ import { formAction } from '@/lib/auth/action';
 import { authenticate, confirmPasswordReset, requestPasswordReset, signUp } from '@/lib/auth/accounts';
 import { acceptInvitation } from '@/lib/teams/invitations';
 import { resetConfirmSchema, resetRequestSchema, signInSchema, signUpSchema } from '@/lib/validation/auth';
+import { startSession, signOut } from '@/lib/auth/sessions';
 
 // The forms carry where to return to and which invitation they answer; the shared schemas don't.
 const next = z.string().optional();
@@ -16,8 +17,7 @@ const token = z
 
 export const signInAction = formAction(signInSchema.extend({ next }), async (data, { session, address }) => {
   const user = await authenticate({ email: data.email, password: data.password }, address);
-  session.userId = user.id;
-  await session.save();
+  await startSession(session, user.id);
   redirect(safeNextPath(data.next));
 });
 
@@ -28,8 +28,7 @@ export const signUpAction = formAction(signUpSchema.extend({ next }), async (dat
     password: data.password,
     teamName: data.teamName,
   });
-  session.userId = user.id;
-  await session.save();
+  await startSession(session, user.id);
   redirect(safeNextPath(data.next));
 });
 
@@ -49,8 +48,7 @@ export const confirmResetAction = formAction(resetConfirmSchema, async (data) =>
 /** Joining as the person already signed in: nothing to fill in. */
 export const joinAsMemberAction = formAction(z.object({ token }), async (data, { session, signedIn }) => {
   const result = await acceptInvitation(data.token, { userId: signedIn().userId });
-  session.userId = result.userId;
-  await session.save();
+  await startSession(session, result.userId);
   redirect('/dashboard');
 });
 
@@ -59,13 +57,12 @@ export const joinWithAccountAction = formAction(
   signUpSchema.pick({ name: true, password: true }).extend({ token }),
   async (data, { session }) => {
     const result = await acceptInvitation(data.token, { name: data.name, password: data.password });
-    session.userId = result.userId;
-    await session.save();
+    await startSession(session, result.userId);
     redirect('/dashboard');
   },
 );
 
 export const signOutAction = formAction(z.object({}), async (_data, { session }) => {
-  session.destroy();
+  await signOut(session);
   redirect('/');
 });

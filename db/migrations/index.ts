@@ -3,6 +3,7 @@ import * as workbench from './20261201-0002-workbench';
 import * as peerReview from './20261201-0003-peer-review';
 import * as publishing from './20261201-0004-publishing';
 import * as directionAndChecks from './20261202-01-direction-and-checks';
+import * as hardening from './20261202-02-hardening';
 
 /**
  * Every migration in the order it runs. Listed by hand (not globbed) so the same list works
@@ -15,4 +16,5 @@ export const migrations = [
   { name: '20261201-0003-peer-review', ...peerReview },
   { name: '20261201-0004-publishing', ...publishing },
   { name: '20261202-01-direction-and-checks', ...directionAndChecks },
+  { name: '20261202-02-hardening', ...hardening },
 ];

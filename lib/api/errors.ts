@@ -13,6 +13,7 @@ export const ERROR_STATUS = {
   unsupported_media_type: 415,
   rate_limited: 429,
   internal: 500,
+  unavailable: 503,
 } as const;
 
 export type ErrorCode = keyof typeof ERROR_STATUS;
@@ -44,3 +45,8 @@ export const forbidden = (message = 'Your role in this team does not allow that.
   new AppError('forbidden', message);
 export const notFound = (what = 'That') => new AppError('not_found', `${what} was not found.`);
 export const conflict = (message: string) => new AppError('conflict', message);
+/** The database could not take this write in time; nothing was written (503 with Retry-After). */
+export const busy = (retryAfterSeconds = 1) =>
+  new AppError('unavailable', 'The server is busy saving other changes. Nothing was saved; try again in a moment.', {
+    retryAfterSeconds,
+  });

@@ -4,11 +4,12 @@ import { recordEvent } from '@/lib/audit/record';
 import { db } from '@/lib/db';
 import { env } from '@/lib/env';
 import { passwordResetMail } from '@/lib/mail/templates';
-import { sendMail } from '@/lib/mail/send';
+import { sendMailLater } from '@/lib/mail/send';
 import { createTeam } from '@/lib/teams/teams';
 import { PasswordResetToken, User } from '@/models';
 import { checkPassword, DUMMY_HASH, hashPassword } from './password';
-import { assertNotLimited, clearFailures, recordFailure } from './rate-limit';
+import { assertNotLimitedAfter, clearFailures, succeeded, takeTry } from './rate-limit';
+import { endSessions } from './sessions';
 import { hashToken, newToken } from './tokens';
 
 export const RESET_TTL_MS = 60 * 60 * 1000;
@@ -23,35 +24,39 @@ const publicUser = (u: User): PublicUser => ({ id: u.id, name: u.name, email: u.
 
 /** Creates the account and its team, the new user as owner. */
 export async function signUp(input: { name: string; email: string; password: string; teamName: string }) {
+  // Hashed first, so a taken address takes as long to answer as a new one.
+  const passwordHash = await hashPassword(input.password);
   if (await User.count({ where: { email: input.email } })) {
     throw conflict('An account with that e-mail already exists. Sign in instead, or reset the password.');
   }
-  const passwordHash = await hashPassword(input.password);
   return db().transaction(async (transaction) => {
     const user = await User.create({ name: input.name, email: input.email, passwordHash }, { transaction });
     const team = await createTeam(input.teamName, user.id, transaction);
-    await recordEvent({ teamId: team.id, actorId: user.id, action: 'team.created', subjectType: 'team', subjectId: team.id }, transaction);
+    await recordEvent(
+      { teamId: team.id, actorId: user.id, action: 'team.created', subjectType: 'team', subjectId: team.id },
+      transaction,
+    );
     return { user: publicUser(user), team: { id: team.id, name: team.name, slug: team.slug } };
   });
 }
 
 /** Checks e-mail and password under the sign-in rate limit; the same message for either mistake. */
 export async function authenticate(input: { email: string; password: string }, address: string): Promise<PublicUser> {
-  assertNotLimited(input.email, address);
+  const counts = await takeTry(input.email, address);
   const user = await User.scope('withPassword').findOne({ where: { email: input.email } });
   const ok = await checkPassword(input.password, user?.passwordHash ?? DUMMY_HASH);
   if (!user || !ok) {
-    recordFailure(input.email, address);
-    assertNotLimited(input.email, address);
+    assertNotLimitedAfter(counts);
     throw new AppError('unauthorized', 'That e-mail and password do not match an account.');
   }
-  clearFailures(input.email);
+  await succeeded(input.email, address);
   return publicUser(user);
 }
 
 /**
  * Mails a single-use reset link. Answers the same whether or not the address has an account,
- * so the form cannot be used to find out who is registered.
+ * so the form cannot be used to find out who is registered: the mail goes out after the answer
+ * (its time and a relay's failure never show in it).
  */
 export async function requestPasswordReset(email: string): Promise<void> {
   const user = await User.findOne({ where: { email } });
@@ -59,7 +64,7 @@ export async function requestPasswordReset(email: string): Promise<void> {
   const { token, hash } = newToken();
   await PasswordResetToken.create({ userId: user.id, tokenHash: hash, expiresAt: new Date(Date.now() + RESET_TTL_MS) });
   const url = `${env().APP_URL}/reset-password?token=${encodeURIComponent(token)}`;
-  await sendMail(passwordResetMail({ to: user.email, name: user.name, url }));
+  sendMailLater(passwordResetMail({ to: user.email, name: user.name, url }));
 }
 
 /** Sets the new password if the token is known, unused and under an hour old; the token is then spent. */
@@ -67,17 +72,33 @@ export async function confirmPasswordReset(token: string, password: string): Pro
   const record = await PasswordResetToken.findOne({
     where: { tokenHash: hashToken(token), usedAt: null, expiresAt: { [Op.gt]: new Date() } },
   });
-  if (!record) throw badRequest('This reset link has expired or was already used. Ask for a new one.', [{ path: 'token', message: 'Expired or used.' }]);
+  if (!record) throw expiredLink();
   const passwordHash = await hashPassword(password);
-  return db().transaction(async (transaction) => {
+  const user = await db().transaction(async (transaction) => {
+    // Spent in one conditional UPDATE: of concurrent confirms with one link, exactly one wins.
+    const [spent] = await PasswordResetToken.update(
+      { usedAt: new Date() },
+      { where: { id: record.id, usedAt: null }, transaction },
+    );
+    if (!spent) throw expiredLink();
     // Spend every outstanding link of this person, not just this one.
-    await PasswordResetToken.update({ usedAt: new Date() }, { where: { userId: record.userId, usedAt: null }, transaction });
+    await PasswordResetToken.update(
+      { usedAt: new Date() },
+      { where: { userId: record.userId, usedAt: null }, transaction },
+    );
     await User.update({ passwordHash }, { where: { id: record.userId }, transaction });
-    const user = (await User.findByPk(record.userId, { transaction }))!;
-    clearFailures(user.email);
-    return publicUser(user);
+    // A new password ends every session, a stolen cookie's included.
+    await endSessions(record.userId, transaction);
+    return (await User.findByPk(record.userId, { transaction }))!;
   });
+  await clearFailures(user.email);
+  return publicUser(user);
 }
+
+const expiredLink = () =>
+  badRequest('This reset link has expired or was already used. Ask for a new one.', [
+    { path: 'token', message: 'Expired or used.' },
+  ]);
 
 export async function findUser(userId: number): Promise<PublicUser | null> {
   const user = await User.findByPk(userId);

@@ -1,7 +1,9 @@
 import { headers } from 'next/headers';
 import type { z } from 'zod';
 import { AppError } from '@/lib/api/errors';
+import { busyError } from '@/lib/api/respond';
 import { loadActor } from './actor';
+import { forwardedClient } from './client-address';
 import { authorize, requireActor } from './authorize';
 import { currentSession } from './current';
 import type { Action, Actor, Resource } from './policy';
@@ -31,10 +33,7 @@ export interface ActionContext {
  * @example
  * export const inviteAction = formAction(inviteSchema, async (data, { authorize }) => { ... });
  */
-export function formAction<T>(
-  schema: z.ZodType<T>,
-  fn: (data: T, ctx: ActionContext) => Promise<FormState | void>,
-) {
+export function formAction<T>(schema: z.ZodType<T>, fn: (data: T, ctx: ActionContext) => Promise<FormState | void>) {
   return async (_previous: FormState, formData: FormData): Promise<FormState> => {
     const values = textFields(formData);
     const parsed = schema.safeParse(values);
@@ -47,8 +46,8 @@ export function formAction<T>(
       return { errors, values: withoutSecrets(values), message: 'Please correct the highlighted fields.' };
     }
     const session = await currentSession();
-    const actor = await loadActor(session.userId);
-    const address = (await headers()).get('x-forwarded-for')?.split(',')[0]?.trim() || 'local';
+    const actor = await loadActor(session);
+    const address = forwardedClient(await headers());
     try {
       return (
         (await fn(parsed.data, {
@@ -59,7 +58,8 @@ export function formAction<T>(
           signedIn: () => requireActor(actor),
         })) ?? { ok: true }
       );
-    } catch (error) {
+    } catch (thrown) {
+      const error = busyError(thrown) ?? thrown;
       if (error instanceof AppError) {
         // A domain error that names its field ("Already a member") shows under that field too.
         const errors: Record<string, string[]> = {};

@@ -11,7 +11,7 @@ export async function currentSession() {
 }
 
 /** The signed-in actor for this render (loaded once per request), or null. */
-export const currentActor = cache(async () => loadActor((await currentSession()).userId));
+export const currentActor = cache(async () => loadActor(await currentSession()));
 
 /** For signed-in pages: the actor, or a redirect to /sign-in that comes back here. */
 export async function requirePageActor(returnTo: string) {

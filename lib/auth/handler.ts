@@ -2,7 +2,10 @@ import { getIronSession, type IronSession } from 'iron-session';
 import type { z } from 'zod';
 import { badRequest } from '@/lib/api/errors';
 import { errorResponse, fromZod } from '@/lib/api/respond';
+import { env } from '@/lib/env';
 import { loadActor } from './actor';
+import { forwardedClient } from './client-address';
+import { assertContentType, crossSiteReason, crossSiteRefusal, hasBody, isSafeMethod } from './same-origin';
 import { authorize, requireActor } from './authorize';
 import type { Action, Actor, Resource } from './policy';
 import { sessionOptions, type SessionData } from './session';
@@ -27,6 +30,8 @@ interface RouteOptions<P, B, Q> {
   query?: z.ZodType<Q>;
   /** 'required' (default) answers 401 before the handler runs when signed out. */
   auth?: 'required' | 'optional';
+  /** The route reads a multipart upload itself (documented in API.md); otherwise bodies are JSON. */
+  multipart?: boolean;
 }
 
 type NextRouteContext = { params: Promise<Record<string, string | string[]>> };
@@ -49,8 +54,13 @@ export function route<P = Record<string, never>, B = undefined, Q = Record<strin
   return async (req: Request, context?: NextRouteContext): Promise<Response> => {
     const cookieCarrier = new Response();
     try {
+      // Before the session is read: another site's request learns nothing and changes nothing.
+      if (crossSiteReason(req.method, req.headers, req.url, env().APP_URL)) throw crossSiteRefusal();
+      if (!isSafeMethod(req.method) && (options.body || options.multipart || hasBody(req.headers))) {
+        assertContentType(req.headers, options.multipart ? 'multipart' : 'json');
+      }
       const session = await getIronSession<SessionData>(req, cookieCarrier, sessionOptions());
-      const actor = await loadActor(session.userId);
+      const actor = await loadActor(session);
       if (options.auth !== 'optional' && !actor) requireActor(actor);
 
       const params = parseWith(options.params, (await context?.params) ?? {});
@@ -92,8 +102,9 @@ async function readJson(req: Request): Promise<unknown> {
   }
 }
 
+/** Resolved by the server from the socket and TRUSTED_PROXIES (lib/auth/client-address.ts). */
 export function clientAddress(req: Request): string {
-  return req.headers.get('x-forwarded-for')?.split(',')[0]?.trim() || req.headers.get('x-real-ip') || 'local';
+  return forwardedClient(req.headers);
 }
 
 function withCookies(response: Response, carrier: Response): Response {

@@ -9,5 +9,5 @@ import { sessionOptions, type SessionData } from './session';
  */
 export async function actorFromRequest(req: IncomingMessage, res: ServerResponse) {
   const session = await getIronSession<SessionData>(req, res, sessionOptions());
-  return loadActor(session.userId);
+  return loadActor(session);
 }

@@ -2,6 +2,8 @@ import type { SessionOptions } from 'iron-session';
 
 export interface SessionData {
   userId?: number;
+  /** The user's session generation when this session began (lib/auth/sessions.ts). */
+  generation?: number;
 }
 
 export const SESSION_COOKIE = 'loadbearing_session';

@@ -79,7 +79,17 @@ function send(req: IncomingMessage, res: ServerResponse, entry: Entry): void {
   res.end(req.method === 'HEAD' ? undefined : body);
 }
 
-const KEPT_HEADERS = ['content-type', 'cache-control', 'etag'] as const;
+// The security headers travel with the page (lib/security/headers.ts).
+const KEPT_HEADERS = [
+  'content-type',
+  'cache-control',
+  'etag',
+  'content-security-policy',
+  'x-content-type-options',
+  'referrer-policy',
+  'x-frame-options',
+  'strict-transport-security',
+] as const;
 
 /** Asks the server for the page as a signed-out reader and keeps a 200 answer. */
 export async function fill(path: string, origin: string): Promise<void> {

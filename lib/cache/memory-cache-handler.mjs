@@ -13,6 +13,7 @@
 const STORE_KEY = 'loadbearingRenderedPages';
 // A bound, oldest first out: a crawler asking for many slugs must not grow memory without end.
 const MAX_ENTRIES = 1000;
+const ERROR_PAGE = /(?:^|[/$])(?:_not-found|_error|404|500)$/;
 
 /** @returns {Map<string, { value: unknown, lastModified: number, tags: string[], cacheControl?: unknown }>} */
 function store() {
@@ -35,7 +36,9 @@ export default class MemoryCacheHandler {
   async set(key, data, ctx) {
     const entries = store();
     entries.delete(key);
-    if (data === null) return;
+    // An error page is never kept: rendered for one request, it carries that request's path and
+    // query string (a private link's token), which the next visitor of any missing page would see.
+    if (data === null || ERROR_PAGE.test(key)) return;
     if (entries.size >= MAX_ENTRIES) entries.delete(entries.keys().next().value);
     entries.set(key, {
       value: data,

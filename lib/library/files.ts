@@ -3,7 +3,8 @@ import { AppError, notFound } from '@/lib/api/errors';
 import { recordEvent } from '@/lib/audit/record';
 import { storage } from '@/lib/storage';
 import type { StudyDTO } from '@/lib/reviews/types';
-import type { Study } from '@/models';
+import { writeTransaction } from '@/lib/reviews/transaction';
+import { Study } from '@/models';
 import { toStudyDTO } from './dto';
 import { appraisalCounts } from './studies';
 import { tooLarge } from './upload';
@@ -31,18 +32,28 @@ export async function attachPdf(study: Study, userId: number, file: File): Promi
   if (!isPdf(bytes))
     throw new AppError('unsupported_media_type', 'That file is not a PDF (it does not start with %PDF-).');
   const key = `studies/${study.teamId}/${study.id}-${randomBytes(8).toString('hex')}.pdf`;
-  const previous = study.pdfKey;
   await storage().put(key, bytes);
+  let previous: string | null;
   try {
-    await study.update({ pdfKey: key });
-    await recordEvent({
-      teamId: study.teamId,
-      actorId: userId,
-      action: 'study.pdf_uploaded',
-      subjectType: 'study',
-      subjectId: study.id,
-      data: { bytes: bytes.length },
+    // The key replaced is the one stored now, read in the write transaction: of two uploads at
+    // once, the second replaces (and deletes) the first's file instead of leaving it orphaned.
+    previous = await writeTransaction(async (transaction) => {
+      const current = await Study.findByPk(study.id, { attributes: ['id', 'pdfKey'], transaction });
+      await Study.update({ pdfKey: key }, { where: { id: study.id }, transaction });
+      await recordEvent(
+        {
+          teamId: study.teamId,
+          actorId: userId,
+          action: 'study.pdf_uploaded',
+          subjectType: 'study',
+          subjectId: study.id,
+          data: { bytes: bytes.length },
+        },
+        transaction,
+      );
+      return current?.pdfKey ?? null;
     });
+    study.pdfKey = key;
   } catch (error) {
     await storage().delete(key);
     throw error;

@@ -12,6 +12,7 @@ import type { ReferenceInput, StudyListQuery, StudyMetaInput, UpdateStudyInput }
 import { Appraisal, Review, Study } from '@/models';
 import { referenceColumns } from './columns';
 import { storage } from '@/lib/storage';
+import { blindReviewIds } from '@/lib/rounds/freeze';
 import { toStudyDTO } from './dto';
 
 /** Appraisals per study, for the given studies. */
@@ -64,12 +65,15 @@ export async function listStudies(actor: Actor, query: StudyListQuery): Promise<
     // SQLite's LIKE is case-insensitive for ASCII; the pattern's own % and _ are escaped with \.
     const pattern = db().escape(likePattern(query.q));
     const columns = ['title', 'citation', 'doi', 'journal', 'outcome'];
-    and.push(literal(`(${columns.map((c) => `\`Study\`.\`${c}\` LIKE ${pattern} ESCAPE '\\'`).join(' OR ')})`));
+    // Raw SQL names the table, never the model: a production build renames classes.
+    const matches = columns.map((c) => `${c} LIKE ${pattern} ESCAPE '\\'`).join(' OR ');
+    and.push({ id: { [Op.in]: literal(`(SELECT id FROM studies WHERE ${matches})`) } });
   }
   if (query.tag) {
-    and.push(
-      literal(`EXISTS (SELECT 1 FROM json_each(\`Study\`.\`tags\`) WHERE json_each.value = ${db().escape(query.tag)})`),
-    );
+    const tag = db().escape(query.tag);
+    and.push({
+      id: { [Op.in]: literal(`(SELECT studies.id FROM studies, json_each(studies.tags) WHERE json_each.value = ${tag})`) },
+    });
   }
   const descending = query.sort.startsWith('-');
   const key = query.sort.replace(/^-/, '') as keyof typeof SORT_COLUMNS;
@@ -83,8 +87,13 @@ export async function listStudies(actor: Actor, query: StudyListQuery): Promise<
   return { studies: await studiesDTO(rows), total: count, ...page };
 }
 
-/** GET /api/studies/:id: the study and its appraisals across the team's reviews. */
-export async function studyDetail(study: Study): Promise<StudyDetailDTO> {
+/**
+ * GET /api/studies/:id and the study page: the study and its appraisals across the team's
+ * reviews, as `viewerId` may see them. Blind scoring: a review this person scores blind in an
+ * open round is left out, since its rows carry the engine's certainty and applicability.
+ */
+export async function studyDetail(study: Study, viewerId: number): Promise<StudyDetailDTO> {
+  const blind = await blindReviewIds(viewerId);
   const appraisals = await Appraisal.findAll({
     where: { studyId: study.id },
     order: [
@@ -92,7 +101,7 @@ export async function studyDetail(study: Study): Promise<StudyDetailDTO> {
       ['id', 'ASC'],
     ],
   });
-  const reviewIds = [...new Set(appraisals.map((a) => a.reviewId))];
+  const reviewIds = [...new Set(appraisals.map((a) => a.reviewId))].filter((id) => !blind.has(id));
   const rows: StudyDetailDTO['appraisals'] = [];
   for (const reviewId of reviewIds) {
     // Certainty and applicability depend on the review's protocol and population, so each review is derived on its own.

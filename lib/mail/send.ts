@@ -32,3 +32,23 @@ function transport(): Transporter {
 export async function sendMail(mail: Mail): Promise<void> {
   await transport().sendMail({ from: env().MAIL_FROM, ...mail });
 }
+
+const pending = new Set<Promise<void>>();
+
+/**
+ * Sends after the answer: for mail whose sending (or failing) must not show in the response,
+ * such as a password reset (how long it takes, or an error, would tell whether the address has
+ * an account). A relay failure is logged, never thrown.
+ */
+export function sendMailLater(mail: Mail): void {
+  const sending = new Promise<void>((resolve) => setImmediate(resolve))
+    .then(() => sendMail(mail))
+    .catch((error) => console.error(`Mail to ${mail.to} could not be sent:`, error))
+    .finally(() => pending.delete(sending));
+  pending.add(sending);
+}
+
+/** Resolves when every mail handed to sendMailLater has been tried (tests, a graceful shutdown). */
+export async function mailQueueDrained(): Promise<void> {
+  while (pending.size) await Promise.all([...pending]);
+}

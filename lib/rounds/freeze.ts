@@ -40,6 +40,24 @@ export async function assertSeesScores(userId: number, reviewId: number): Promis
 }
 
 /**
+ * The reviews whose engine numbers and verdict this person must not see yet: those with an open
+ * round to which they are invited and have not submitted. Every read that shows a verdict,
+ * probabilities, certainty or applicability asks this (blind scoring, docs/scoring.md).
+ */
+export async function blindReviewIds(userId: number): Promise<Set<number>> {
+  const invitations = await RoundInvitation.findAll({
+    where: { reviewerId: userId, submittedAt: null },
+    attributes: ['roundId'],
+  });
+  if (!invitations.length) return new Set();
+  const open = await ReviewRound.findAll({
+    where: { id: invitations.map((i) => i.roundId), status: 'open' },
+    attributes: ['reviewId'],
+  });
+  return new Set(open.map((r) => r.reviewId));
+}
+
+/**
  * Review summaries with the cached verdict blanked on the reviews where this person is still
  * scoring blind (for GET /api/reviews and the pages that list reviews).
  */
@@ -48,15 +66,6 @@ export async function withBlindVerdictsHidden<T extends { id: number; verdict: u
   reviews: T[],
 ): Promise<T[]> {
   if (!reviews.length) return reviews;
-  const invitations = await RoundInvitation.findAll({
-    where: { reviewerId: userId, submittedAt: null },
-    attributes: ['roundId'],
-  });
-  if (!invitations.length) return reviews;
-  const open = await ReviewRound.findAll({
-    where: { id: invitations.map((i) => i.roundId), status: 'open' },
-    attributes: ['reviewId'],
-  });
-  const blind = new Set(open.map((r) => r.reviewId));
+  const blind = await blindReviewIds(userId);
   return reviews.map((r) => (blind.has(r.id) ? { ...r, verdict: null, verdictLabel: null } : r));
 }

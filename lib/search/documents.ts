@@ -79,6 +79,8 @@ export interface SearchFilters {
   kind?: SearchDoc['kind'];
   status?: string;
   verdict?: string;
+  /** Reviews whose verdict the searcher must not learn (lib/rounds/freeze.ts, blindReviewIds). */
+  blindReviewIds?: ReadonlySet<number>;
   tag?: string;
   limit?: number;
 }
@@ -95,7 +97,8 @@ function passes(doc: SearchDoc, f: SearchFilters): boolean {
     // Status, verdict and tag describe reviews; a mechanism or study passes when the filter does not concern it.
     if (doc.kind === 'review') {
       if (f.status && doc.status !== f.status) return false;
-      if (f.verdict && doc.verdict !== f.verdict) return false;
+      // A review scored blind by the searcher never matches a verdict filter (it would tell the verdict).
+      if (f.verdict && (doc.verdict !== f.verdict || f.blindReviewIds?.has(doc.id))) return false;
       if (f.tag && !doc.tags.includes(f.tag.toLowerCase())) return false;
     } else if (f.tag && doc.kind === 'study') {
       if (!doc.tags.includes(f.tag.toLowerCase())) return false;

@@ -1,4 +1,5 @@
 import { decide, type Actor } from '@/lib/auth/policy';
+import { blindReviewIds } from '@/lib/rounds/freeze';
 import type { MatchDTO } from '@/lib/publishing/types';
 import type { SearchQuery } from '@/lib/validation/publishing';
 import type { SearchFilters } from './documents';
@@ -27,12 +28,15 @@ export function searchableTeams(actor: Actor, teamId?: number): number[] {
 }
 
 export async function searchForActor(actor: Actor, query: SearchQuery): Promise<SearchResultDTO[]> {
+  // Blind scoring: the verdict of a review the searcher scores blind is neither shown nor filterable.
+  const blind = await blindReviewIds(actor.userId);
   const filters: SearchFilters = {
     kind: query.kind,
     status: query.status,
     verdict: query.verdict,
     tag: query.tag,
     limit: query.limit,
+    blindReviewIds: blind,
   };
   const hits = await searchTeams(searchableTeams(actor, query.teamId), query.q, filters);
   return hits.map(({ doc, score, matches }) => {
@@ -46,7 +50,7 @@ export async function searchForActor(actor: Actor, query: SearchQuery): Promise<
           detail: doc.claim,
           href: `/reviews/${doc.id}`,
           status: doc.status,
-          verdict: doc.verdict,
+          verdict: blind.has(doc.id) ? null : doc.verdict,
           tags: doc.tags,
           score,
           matches,

@@ -23,15 +23,39 @@ export async function inviteMember(inviterId: number, teamId: number, input: { e
   const invitation = await db().transaction(async (transaction) => {
     await Invitation.destroy({ where: { teamId, email: input.email, acceptedAt: null }, transaction });
     const created = await Invitation.create(
-      { teamId, email: input.email, role: input.role, tokenHash: hash, invitedById: inviterId, expiresAt: new Date(Date.now() + INVITATION_TTL_MS) },
+      {
+        teamId,
+        email: input.email,
+        role: input.role,
+        tokenHash: hash,
+        invitedById: inviterId,
+        expiresAt: new Date(Date.now() + INVITATION_TTL_MS),
+      },
       { transaction },
     );
-    await recordEvent({ teamId, actorId: inviterId, action: 'member.invited', subjectType: 'invitation', subjectId: created.id, data: { email: input.email, role: input.role } }, transaction);
+    await recordEvent(
+      {
+        teamId,
+        actorId: inviterId,
+        action: 'member.invited',
+        subjectType: 'invitation',
+        subjectId: created.id,
+        data: { email: input.email, role: input.role },
+      },
+      transaction,
+    );
     return created;
   });
   const url = `${env().APP_URL}/invitations/${encodeURIComponent(token)}`;
-  await sendMail(invitationMail({ to: input.email, teamName: team.name, inviterName: inviter.name, role: input.role, url }));
-  return { id: invitation.id, email: invitation.email, role: invitation.role, expiresAt: invitation.expiresAt.toISOString() };
+  await sendMail(
+    invitationMail({ to: input.email, teamName: team.name, inviterName: inviter.name, role: input.role, url }),
+  );
+  return {
+    id: invitation.id,
+    email: invitation.email,
+    role: invitation.role,
+    expiresAt: invitation.expiresAt.toISOString(),
+  };
 }
 
 export interface InvitationView {
@@ -68,7 +92,15 @@ export async function acceptInvitation(
   who: { userId: number } | { name: string; password: string },
 ): Promise<{ userId: number; teamId: number }> {
   const invitation = await openInvitation(token);
+  // Hashed before the write transaction: the writer's turn is not spent on bcrypt.
+  const passwordHash = 'userId' in who ? null : await hashPassword(who.password);
   return db().transaction(async (transaction) => {
+    // Spent in one conditional UPDATE: of two accepts at the same moment one wins, the other is told.
+    const [spent] = await Invitation.update(
+      { acceptedAt: new Date() },
+      { where: { id: invitation.id, acceptedAt: null }, transaction },
+    );
+    if (!spent) throw conflict('This invitation was already used. Ask the team for a new one.');
     let userId: number;
     if ('userId' in who) {
       userId = who.userId;
@@ -77,7 +109,7 @@ export async function acceptInvitation(
         throw conflict('An account with this e-mail exists already. Sign in, then open the link again.');
       }
       const user = await User.create(
-        { name: who.name, email: invitation.email, passwordHash: await hashPassword(who.password) },
+        { name: who.name, email: invitation.email, passwordHash: passwordHash! },
         { transaction },
       );
       userId = user.id;
@@ -86,8 +118,17 @@ export async function acceptInvitation(
       throw badRequest('You are already in this team.', [{ path: 'token', message: 'Already a member.' }]);
     }
     await Membership.create({ teamId: invitation.teamId, userId, role: invitation.role }, { transaction });
-    await invitation.update({ acceptedAt: new Date() }, { transaction });
-    await recordEvent({ teamId: invitation.teamId, actorId: userId, action: 'member.joined', subjectType: 'invitation', subjectId: invitation.id, data: { role: invitation.role } }, transaction);
+    await recordEvent(
+      {
+        teamId: invitation.teamId,
+        actorId: userId,
+        action: 'member.joined',
+        subjectType: 'invitation',
+        subjectId: invitation.id,
+        data: { role: invitation.role },
+      },
+      transaction,
+    );
     return { userId, teamId: invitation.teamId };
   });
 }

@@ -1,4 +1,4 @@
-import { Op } from 'sequelize';
+import { Op, type Transaction } from 'sequelize';
 import { badRequest, conflict, notFound } from '@/lib/api/errors';
 import { recordEvent } from '@/lib/audit/record';
 import { db } from '@/lib/db';
@@ -43,39 +43,74 @@ export async function listMembers(teamId: number): Promise<{ members: MemberRow[
         joinedAt: m.createdAt.toISOString(),
       };
     }),
-    invitations: invitations.map((i) => ({ id: i.id, email: i.email, role: i.role, expiresAt: i.expiresAt.toISOString() })),
+    invitations: invitations.map((i) => ({
+      id: i.id,
+      email: i.email,
+      role: i.role,
+      expiresAt: i.expiresAt.toISOString(),
+    })),
   };
 }
 
-async function membershipOf(teamId: number, membershipId: number): Promise<Membership> {
-  const membership = await Membership.findOne({ where: { id: membershipId, teamId } });
+async function membershipOf(teamId: number, membershipId: number, transaction?: Transaction): Promise<Membership> {
+  const membership = await Membership.findOne({ where: { id: membershipId, teamId }, transaction });
   if (!membership) throw notFound('That member');
   return membership;
 }
 
-async function assertAnotherOwnerRemains(teamId: number, membership: Membership) {
+/**
+ * The last-owner rule, checked inside the write transaction that changes the membership: writes
+ * are serialised (lib/sqlite-writer.ts), so two owners demoting each other at once see each
+ * other's change and the second one is refused.
+ */
+async function assertAnotherOwnerRemains(teamId: number, membership: Membership, transaction: Transaction) {
   if (membership.role !== 'owner') return;
-  const owners = await Membership.count({ where: { teamId, role: 'owner' } });
+  const owners = await Membership.count({ where: { teamId, role: 'owner' }, transaction });
   if (owners <= 1) throw conflict('A team needs at least one owner. Make someone else owner first.');
 }
 
-export async function changeRole(actorId: number, teamId: number, membershipId: number, role: Role): Promise<MemberRow> {
-  const membership = await membershipOf(teamId, membershipId);
-  if (membership.role !== role && role !== 'owner') await assertAnotherOwnerRemains(teamId, membership);
-  const from = membership.role;
+export async function changeRole(
+  actorId: number,
+  teamId: number,
+  membershipId: number,
+  role: Role,
+): Promise<MemberRow> {
   await db().transaction(async (transaction) => {
+    const membership = await membershipOf(teamId, membershipId, transaction);
+    if (membership.role !== role && role !== 'owner') await assertAnotherOwnerRemains(teamId, membership, transaction);
+    const from = membership.role;
     await membership.update({ role }, { transaction });
-    await recordEvent({ teamId, actorId, action: 'member.role_changed', subjectType: 'membership', subjectId: membership.id, data: { from, to: role } }, transaction);
+    await recordEvent(
+      {
+        teamId,
+        actorId,
+        action: 'member.role_changed',
+        subjectType: 'membership',
+        subjectId: membership.id,
+        data: { from, to: role },
+      },
+      transaction,
+    );
   });
   return (await listMembers(teamId)).members.find((m) => m.membershipId === membershipId)!;
 }
 
 export async function removeMember(actorId: number, teamId: number, membershipId: number): Promise<void> {
-  const membership = await membershipOf(teamId, membershipId);
-  await assertAnotherOwnerRemains(teamId, membership);
   await db().transaction(async (transaction) => {
+    const membership = await membershipOf(teamId, membershipId, transaction);
+    await assertAnotherOwnerRemains(teamId, membership, transaction);
     await membership.destroy({ transaction });
-    await recordEvent({ teamId, actorId, action: 'member.removed', subjectType: 'membership', subjectId: membership.id, data: { userId: membership.userId } }, transaction);
+    await recordEvent(
+      {
+        teamId,
+        actorId,
+        action: 'member.removed',
+        subjectType: 'membership',
+        subjectId: membership.id,
+        data: { userId: membership.userId },
+      },
+      transaction,
+    );
   });
 }
 

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { idParam } from './ids';
 import { ROLES } from '@/models/roles';
 
 /** Schemas shared by the forms (inline errors) and the route handlers (400s). */
@@ -50,12 +51,9 @@ export const inviteSchema = z.object({ email, role });
 export const roleChangeSchema = z.object({ role });
 
 /** Accepting as the signed-in user needs nothing; a new account needs a name and a password. */
-export const acceptInvitationSchema = z.union([
-  z.object({ name, password: newPassword }),
-  z.object({}).strict(),
-]);
+export const acceptInvitationSchema = z.union([z.object({ name, password: newPassword }), z.object({}).strict()]);
 
-export const idParam = z.coerce.number({ error: 'Must be a number.' }).int().positive();
+export { idParam } from './ids';
 export const teamParams = z.object({ teamId: idParam });
 export const memberParams = z.object({ teamId: idParam, membershipId: idParam });
 export const tokenParams = z.object({ token: z.string().min(10) });

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { DESIRABLE_DIRECTIONS } from '@/lib/scoring/direction';
+import { idField, idParam } from './ids';
 import { BODYWEIGHT_UNITS, convertLoad, PERCENT_UNITS } from '@/lib/reviews/protocol';
 import {
   EFFORTS,
@@ -16,10 +17,7 @@ import {
  * fields, all optional and without defaults, so a PATCH never resets what it does not mention.
  */
 
-export const idParam = z.coerce
-  .number({ error: 'Must be a number.' })
-  .int({ error: 'Must be a whole number.' })
-  .positive({ error: 'Must be a positive number.' });
+export { idField, idParam } from './ids';
 export const reviewParams = z.object({ id: idParam });
 export const mechanismParams = z.object({ id: idParam, mechanismId: idParam });
 
@@ -313,7 +311,7 @@ export const desirableField = z.enum(DESIRABLE_DIRECTIONS, {
 });
 
 export const createReviewSchema = z.object({
-  teamId: idParam,
+  teamId: idField,
   title: title.optional(),
   claim,
   claimSource,

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { CONTRIBUTIONS, RESOLUTION_KINDS, SIGN_OFFS } from '@/lib/rounds/types';
-import { idParam } from './reviews';
+import { idField, idParam } from './reviews';
 
 /**
  * Schemas of peer review, shared by the round pages and the route handlers (a bad body is a 400
@@ -15,7 +15,7 @@ const DAY = 24 * 60 * 60 * 1000;
 
 export const openRoundSchema = z.object({
   reviewerIds: z
-    .array(idParam, { error: 'Choose the reviewers as a list of people.' })
+    .array(idField, { error: 'Choose the reviewers as a list of people.' })
     .min(1, { error: 'Choose at least one reviewer.' })
     .max(MAX_REVIEWERS, { error: `Invite at most ${MAX_REVIEWERS} reviewers to one round.` })
     .refine((ids) => new Set(ids).size === ids.length, { error: 'A reviewer is listed twice.' }),
@@ -39,7 +39,7 @@ const band = z
   .max(6, { error: 'A likelihood band is from 0 to 6.' });
 
 export const ratingSchema = z.object({
-  mechanismId: idParam,
+  mechanismId: idField,
   band: band.nullable().default(null),
   contribution: z
     .enum(CONTRIBUTIONS, { error: 'Contribution is none, small, moderate or large.' })
@@ -71,7 +71,7 @@ export const signOffSchema = z.object({
 
 export const resolutionSchema = z
   .object({
-    mechanismId: idParam,
+    mechanismId: idField,
     kind: z.enum(RESOLUTION_KINDS, { error: 'Choose what happens to this mechanism.' }),
     reason: z.string().trim().max(4000, { error: 'Keep the reason under 4,000 characters.' }).default(''),
   })
@@ -94,7 +94,7 @@ export const closeRoundSchema = z.object({
   closedWithout: z
     .array(
       z.object({
-        reviewerId: idParam,
+        reviewerId: idField,
         reason: z
           .string()
           .trim()
@@ -113,9 +113,9 @@ export const commentSchema = z.object({
     .trim()
     .min(1, { error: 'Write the comment.' })
     .max(4000, { error: 'Keep a comment under 4,000 characters.' }),
-  mechanismId: idParam.nullable().default(null),
-  parentId: idParam.nullable().default(null),
-  roundId: idParam.nullable().default(null),
+  mechanismId: idField.nullable().default(null),
+  parentId: idField.nullable().default(null),
+  roundId: idField.nullable().default(null),
 });
 export type CommentInput = z.infer<typeof commentSchema>;
 

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { normalizeDoi } from '@/lib/citations/doi';
 import { STUDY_DESIGNS, TRAINING_STATUSES } from '@/lib/reviews/types';
-import { idParam, tagsSchema } from './reviews';
+import { idField, idParam, tagsSchema } from './reviews';
 
 /**
  * The evidence library (PRODUCT.md step 3): a study comes in by pasted source (DOI, BibTeX, RIS
@@ -147,7 +147,7 @@ const sourceField = z
  */
 export const createStudySchema = z
   .object({
-    teamId: idParam,
+    teamId: idField,
     source: sourceField.optional(),
     ...(Object.fromEntries(Object.entries(referenceFields).map(([k, v]) => [k, v.optional()])) as {
       [K in keyof typeof referenceFields]: z.ZodOptional<(typeof referenceFields)[K]>;

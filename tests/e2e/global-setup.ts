@@ -91,6 +91,8 @@ export default async function setup(project: TestProject) {
       SMTP_PORT: String(smtp.port),
       MAIL_DROP_DIR: mailDir,
       STORAGE_DIR: path.join(work, 'uploads'),
+      // The browser contexts each send their own x-forwarded-for (a proxy's word, trusted from loopback).
+      TRUSTED_PROXIES: '127.0.0.1,::1',
     },
     stdio: ['ignore', 'inherit', 'inherit'],
   });

@@ -14,7 +14,7 @@ export function useTestApp(): { smtp: () => FakeSmtp } {
     await migrate(db());
     smtp = await startFakeSmtp();
     process.env.SMTP_PORT = String(smtp.port);
-    resetRateLimits();
+    await resetRateLimits();
   });
   afterAll(async () => {
     await smtp?.close();

@@ -1,7 +1,7 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import * as appraisals from '@/app/api/reviews/[id]/appraisals/route';
 import * as studies from '@/app/api/studies/route';
-import { copyMechanism } from '@/lib/search/reuse';
+import { copyMechanism } from '@/lib/reviews/copy-mechanism';
 import { Appraisal, Mechanism } from '@/models';
 import { useTestApp } from '../../helpers/app';
 import { makeTeam, type TeamFixture } from '../reviews/helpers';

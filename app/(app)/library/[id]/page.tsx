@@ -27,5 +27,5 @@ export async function generateMetadata({ params }: Props): Promise<Metadata> {
 // GET /library/:id — the study: APA reference, exports, details, PDF and its appraisals.
 export default async function StudyPage({ params }: Props) {
   const { actor, study } = await load((await params).id);
-  return <StudyDetail studyId={study.id} viewer={toViewer(actor)} fallback={await studyDetail(study)} />;
+  return <StudyDetail studyId={study.id} viewer={toViewer(actor)} fallback={await studyDetail(study, actor.userId)} />;
 }

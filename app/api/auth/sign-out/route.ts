@@ -1,7 +1,8 @@
 import { route } from '@/lib/auth/handler';
+import { signOut } from '@/lib/auth/sessions';
 
 // POST /api/auth/sign-out — ends the session.
 export const POST = route({}, async ({ session }) => {
-  session.destroy();
+  await signOut(session);
   return { ok: true };
 });

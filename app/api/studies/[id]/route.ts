@@ -4,10 +4,10 @@ import { deleteStudy, studyById, studyDetail, updateStudy } from '@/lib/library/
 import { deleteStudyQuery, studyParams, updateStudySchema } from '@/lib/validation/studies';
 
 // GET /api/studies/:id — the study and its appraisals across the team's reviews (staff) → { study, appraisals }.
-export const GET = route({ params: studyParams }, async ({ params, authorize }) => {
+export const GET = route({ params: studyParams }, async ({ params, authorize, signedIn }) => {
   const study = await studyById(params.id);
   authorize('study.read', { teamId: study.teamId }, 'That study');
-  return studyDetail(study);
+  return studyDetail(study, signedIn().userId);
 });
 
 // PATCH /api/studies/:id — reference and appraisal fields (owner, coach) → { study }.

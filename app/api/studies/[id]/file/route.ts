@@ -12,7 +12,7 @@ export const GET = route({ params: studyParams }, async ({ params, authorize }) 
 });
 
 // POST /api/studies/:id/file — multipart `file`, a PDF ≤ 20 MB checked by its %PDF- header (owner, coach) → { study }; 413 too large, 415 not a PDF.
-export const POST = route({ params: studyParams }, async ({ req, params, authorize, signedIn }) => {
+export const POST = route({ params: studyParams, multipart: true }, async ({ req, params, authorize, signedIn }) => {
   const study = await studyById(params.id);
   authorize('study.write', { teamId: study.teamId }, 'That study');
   const form = await readLimitedFormData(req, MAX_PDF_BYTES, 'PDF');

@@ -1,15 +1,18 @@
 import { badRequest, notFound } from '@/lib/api/errors';
-import { writeTransaction } from '@/lib/reviews/transaction';
-import { refreshVerdict } from '@/lib/reviews/verdict';
+import { assertReviewEditable } from '@/lib/rounds/freeze';
+import { onReviewChanged } from '@/lib/search/index-store';
+import { writeTransaction } from './transaction';
+import { refreshVerdict } from './verdict';
 import { Appraisal, Mechanism, Review } from '@/models';
-import { onReviewChanged } from './index-store';
 
 /**
  * Copies a mechanism from a past review into another review of the same team, with its
  * appraisals as new rows that point at the same library studies (the evidence is shared, the
  * judgement is copied and can then be changed without touching the past review). Applicability
  * is re-suggested for the new review's protocol, except where the coach had overridden it.
- * The caller checked `review.update` on the target and `review.read` on the source.
+ * The caller checked `review.update` on the target and `review.read` on the source. The target
+ * must not be frozen by an open peer-review round (409), checked inside the write transaction so
+ * a round opened at the same moment cannot slip in between.
  */
 export async function copyMechanism(
   sourceMechanismId: number,
@@ -25,6 +28,7 @@ export async function copyMechanism(
       { path: 'mechanismId', message: 'Pick a mechanism of another review.' },
     ]);
   const result = await writeTransaction(async (transaction) => {
+    await assertReviewEditable(to.id);
     const last = (await Mechanism.max('position', { where: { reviewId: to.id }, transaction })) as number | null;
     const copy = await Mechanism.create(
       {
