@@ -13,6 +13,7 @@ import { Appraisal, Review, Study } from '@/models';
 import { referenceColumns } from './columns';
 import { storage } from '@/lib/storage';
 import { toStudyDTO } from './dto';
+import { studyHasTag, studyTextMatches } from './study-filters';
 
 /** Appraisals per study, for the given studies. */
 export async function appraisalCounts(studyIds: number[], transaction?: Transaction): Promise<Map<number, number>> {
@@ -47,9 +48,6 @@ const SORT_COLUMNS = {
   design: [['design'], ['title']],
 } as const;
 
-/** SQLite LIKE with the wildcard characters of the search text escaped. */
-const likePattern = (q: string) => `%${q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
-
 /** GET /api/studies: the libraries of the teams where the caller may read studies (the policy decides per team). */
 export async function listStudies(actor: Actor, query: StudyListQuery): Promise<StudyListDTO> {
   const teamIds =
@@ -60,17 +58,8 @@ export async function listStudies(actor: Actor, query: StudyListQuery): Promise<
   if (!teamIds.length) return { studies: [], total: 0, ...page };
   const and: WhereOptions[] = [{ teamId: { [Op.in]: teamIds } }];
   if (query.design) and.push({ design: query.design });
-  if (query.q) {
-    // SQLite's LIKE is case-insensitive for ASCII; the pattern's own % and _ are escaped with \.
-    const pattern = db().escape(likePattern(query.q));
-    const columns = ['title', 'citation', 'doi', 'journal', 'outcome'];
-    and.push(literal(`(${columns.map((c) => `\`Study\`.\`${c}\` LIKE ${pattern} ESCAPE '\\'`).join(' OR ')})`));
-  }
-  if (query.tag) {
-    and.push(
-      literal(`EXISTS (SELECT 1 FROM json_each(\`Study\`.\`tags\`) WHERE json_each.value = ${db().escape(query.tag)})`),
-    );
-  }
+  if (query.q) and.push(studyTextMatches(query.q));
+  if (query.tag) and.push(studyHasTag(query.tag));
   const descending = query.sort.startsWith('-');
   const key = query.sort.replace(/^-/, '') as keyof typeof SORT_COLUMNS;
   const order = SORT_COLUMNS[key].map(([column]) => [column, descending ? 'DESC' : 'ASC'] as [string, string]);
