@@ -3,7 +3,6 @@ import { conflict, notFound } from '@/lib/api/errors';
 import { recordEvent } from '@/lib/audit/record';
 import { decide, type Actor } from '@/lib/auth/policy';
 import { applyReferenceFields, type CslItem } from '@/lib/citations/csl';
-import { db } from '@/lib/db';
 import { uniqueOrConflict, writeTransaction } from '@/lib/reviews/transaction';
 import { deriveAll, loadReviewData, refreshVerdict, refreshVerdictsOfStudy } from '@/lib/reviews/verdict';
 import { toAppraisalDTO } from '@/lib/reviews/rows';
