@@ -17,16 +17,20 @@ import { databaseDialect, db } from '@/lib/db';
 export const CHANNEL = 'loadbearing_search';
 
 export interface Change {
-  kind: 'review' | 'study';
+  /** A review (with its mechanisms), a library study, or any publication (the verdict search; id 0). */
+  kind: 'review' | 'study' | 'verdict';
   id: number;
 }
+
+type Apply = (id: number) => Promise<void>;
 
 interface Feed {
   origin: string;
   client: pg.Client | null;
   ready: Promise<void> | null;
-  onChange: (change: Change) => Promise<void>;
-  onLost: () => void;
+  /** Per kind of change, how each index of this process applies it; and how each forgets itself. */
+  apply: Map<Change['kind'], Apply>;
+  forget: Map<Change['kind'], () => void>;
 }
 
 const store = globalThis as unknown as { loadbearingSearchFeed?: Feed };
@@ -45,22 +49,28 @@ function feed(): Feed {
     origin: randomUUID(),
     client: null,
     ready: null,
-    onChange: async () => {},
-    onLost: () => {},
+    apply: new Map(),
+    forget: new Map(),
   });
 }
 
 /**
  * Starts listening once per process (later calls wait for the same start); resolves when the
- * LISTEN is in place. `onChange` runs for every other process's change, `onLost` when the
- * connection dropped and changes may have been missed.
+ * LISTEN is in place. `apply` runs for every other process's change of that kind, `forget` when
+ * the connection dropped and changes may have been missed.
  */
-export function listenForChanges(onChange: Feed['onChange'], onLost: Feed['onLost']): Promise<void> {
+export function listenForChanges(kinds: Change['kind'][], apply: Apply, forget: () => void): Promise<void> {
   if (!changeFeedActive()) return Promise.resolve();
   const f = feed();
-  f.onChange = onChange;
-  f.onLost = onLost;
+  for (const kind of kinds) {
+    f.apply.set(kind, apply);
+    f.forget.set(kind, forget);
+  }
   return (f.ready ??= connect(f));
+}
+
+function forgetAll(f: Feed) {
+  for (const forget of new Set(f.forget.values())) forget();
 }
 
 async function connect(f: Feed): Promise<void> {
@@ -69,7 +79,7 @@ async function connect(f: Feed): Promise<void> {
     if (f.client !== client) return;
     f.client = null;
     f.ready = null;
-    f.onLost();
+    forgetAll(f);
     client.end().catch(() => {});
   };
   client.on('error', lost);
@@ -78,10 +88,11 @@ async function connect(f: Feed): Promise<void> {
     if (message.channel !== CHANNEL || !message.payload) return;
     const change = JSON.parse(message.payload) as Change & { origin: string };
     if (change.origin === f.origin) return;
-    f.onChange({ kind: change.kind, id: change.id }).catch((error) => {
+    const apply = f.apply.get(change.kind);
+    apply?.(change.id).catch((error) => {
       // The index may now be behind: forget it, the next search rebuilds it.
       console.warn('search: could not apply a change from another process:', error);
-      f.onLost();
+      f.forget.get(change.kind)?.();
     });
   });
   try {

@@ -1,7 +1,7 @@
 import { Op } from 'sequelize';
 import { bodyPlainText } from '@/lib/publishing/render-body';
 import type { FuzzyIndex } from './engine';
-import { listenForChanges, publishChange, type Change } from './change-feed';
+import { listenForChanges, publishChange } from './change-feed';
 import { Mechanism, Review, Study } from '@/models';
 import {
   BODY_CHARS,
@@ -104,14 +104,10 @@ async function build(teamId: number): Promise<TeamIndex> {
   return { fuse: newIndex(docs) };
 }
 
-/** Another process changed a review or a study: the same update as its own hook, from the rows. */
-function applyChange(change: Change): Promise<void> {
-  return change.kind === 'review' ? updateReview(change.id) : updateStudy(change.id);
-}
-
 async function teamIndex(teamId: number): Promise<TeamIndex> {
   // Missed changes (a dropped listening connection) cannot be replayed: forget every index.
-  await listenForChanges(applyChange, resetSearchIndexes);
+  await listenForChanges(['review'], updateReview, resetSearchIndexes);
+  await listenForChanges(['study'], updateStudy, resetSearchIndexes);
   let index = teams().get(teamId);
   if (!index) {
     index = build(teamId);
