@@ -59,8 +59,9 @@ function run(script: string, env: NodeJS.ProcessEnv): void {
 /** The repository's nginx site with this run's ports and folders. */
 export function nginxConfig(work: string, port: number, appPorts: number[]): string {
   let site = readFileSync(path.join(ROOT, 'deploy/nginx/loadbearing.conf'), 'utf8');
-  site = site.replace(/(upstream loadbearing_app \{\n)(?:\s*server [^\n]+\n)+/, (_, head: string) =>
-    head + appPorts.map((p) => `    server 127.0.0.1:${p};\n`).join(''),
+  site = site.replace(
+    /(upstream loadbearing_app \{\n)(?:\s*server [^\n]+\n)+/,
+    (_, head: string) => head + appPorts.map((p) => `    server 127.0.0.1:${p};\n`).join(''),
   );
   site = site.replace(/listen 80;/, `listen 127.0.0.1:${port};`);
   site = site.replace('/var/cache/nginx/loadbearing', path.join(work, 'cache'));
