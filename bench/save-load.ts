@@ -5,7 +5,7 @@
  * honest 409s (a stale version) happen as they would. Counts saves, 409s, other errors and the
  * latency of each save.
  */
-import { newReview } from '../tests/integration/reviews/helpers';
+import { newReview } from '../tests/helpers/review-input';
 
 export interface SaveFigures {
   saves: number;

@@ -12,10 +12,13 @@
  *
  *   npm run build && npx tsx bench/several-processes.ts [seconds per page run] [save seconds]
  */
-import { writeFileSync } from 'node:fs';
+import { spawn, spawnSync } from 'node:child_process';
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
 import { createRequire } from 'node:module';
 import path from 'node:path';
 import pg from 'pg';
+import { freePort } from '../tests/helpers/pg-cluster';
 import { startStack, type Stack } from '../tests/helpers/stack';
 import { coachSaves, type SaveFigures } from './save-load';
 
@@ -112,6 +115,34 @@ export function printSaves(label: string, f: SaveFigures) {
   );
 }
 
+/** The same autosave load on the embedded default: one `npm start` on a SQLite file. */
+async function sqliteSaves() {
+  const work = mkdtempSync(path.join(tmpdir(), 'loadbearing-bench-sqlite-'));
+  const port = await freePort();
+  const env = {
+    ...process.env,
+    DATABASE_URL: path.join(work, 'bench.sqlite'),
+    SESSION_SECRET: 'bench-secret-that-is-long-enough-for-iron-session-00',
+    COOKIE_SECURE: 'false',
+    APP_URL: `http://127.0.0.1:${port}`,
+    PORT: String(port),
+    HOST: '127.0.0.1',
+  };
+  spawnSync(process.execPath, ['--import', 'tsx', 'scripts/seed.ts'], { env: { ...env, NODE_ENV: 'development' } });
+  const app = spawn(process.execPath, ['--import', 'tsx', 'scripts/start.ts'], { env, stdio: 'ignore' });
+  try {
+    for (let i = 0; i < 240; i++) {
+      if (await fetch(`${env.APP_URL}/sign-in`).then((r) => r.status < 500, () => false)) break;
+      await new Promise((r) => setTimeout(r, 250));
+    }
+    printSaves('SQLite, one process', await coachSaves(env.APP_URL, SAVE_SECONDS));
+  } finally {
+    app.kill('SIGTERM');
+    await new Promise((r) => app.once('exit', r));
+    rmSync(work, { recursive: true, force: true });
+  }
+}
+
 async function main() {
   const stack = await startStack({ apps: 2 });
   try {
@@ -121,6 +152,7 @@ async function main() {
   } finally {
     await stack.stop();
   }
+  await sqliteSaves();
 }
 
 main().catch((error) => {

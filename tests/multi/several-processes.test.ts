@@ -2,7 +2,7 @@ import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import pg from 'pg';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { newReview } from '../integration/reviews/helpers';
+import { newReview } from '../helpers/review-input';
 import { startStack, type Stack } from '../helpers/stack';
 
 /**
