@@ -132,6 +132,7 @@ describe('two app processes behind nginx on PostgreSQL', () => {
   it('sends the signed-out verdict page with the stated cache header and never caches a signed-in one', async () => {
     const res = await fetch(`${stack.url}/v/cold-plunges-after-strength`);
     expect(res.headers.get('cache-control')).toBe('public, max-age=0, s-maxage=1');
+    expect(res.headers.get('x-accel-expires')).toBeNull(); // for nginx only, never passed on
     const owner = await signIn(stack.url, 'owner@granite-hollow.test');
     const signedIn = await owner.fetch('/v/cold-plunges-after-strength');
     expect(signedIn.headers.get('x-cache-status')).toBe('BYPASS');

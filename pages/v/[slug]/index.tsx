@@ -1,13 +1,13 @@
 import type { GetServerSideProps, PageConfig } from 'next';
 import { LatestVerdictPage } from '@/components/verdict-page/LatestVerdictPage';
-import { PUBLIC_VERDICT_CACHE_CONTROL } from '@/lib/publishing/page-cache-control';
+import { publicVerdictCacheHeaders } from '@/lib/publishing/page-cache-control';
 import { findVerdictPage } from '@/lib/publishing/queries';
 import type { VerdictPageDTO } from '@/lib/publishing/types';
 
 /**
  * /v/[slug] for everyone who is not signed in: the latest version of a public verdict. Rendered
  * from the database on each request that reaches the app, and marked for shared caches to keep
- * for one second (lib/publishing/page-cache-control.ts): the nginx in front
+ * for at most one second (lib/publishing/page-cache-control.ts): the nginx in front
  * (deploy/nginx/loadbearing.conf) answers nearly every reader from that copy, and a publish,
  * withdrawal or deletion on any app process shows to every reader within the stated bound
  * (docs/deployment.md). Team-only and unknown slugs are 404 here. Signed-in readers never reach
@@ -23,7 +23,7 @@ export const getServerSideProps: GetServerSideProps<{ page: VerdictPageDTO }, { 
   params,
   res,
 }) => {
-  res.setHeader('Cache-Control', PUBLIC_VERDICT_CACHE_CONTROL);
+  for (const [name, value] of Object.entries(publicVerdictCacheHeaders())) res.setHeader(name, value);
   const page = await findVerdictPage(params?.slug ?? '', null);
   if (!page) return { notFound: true };
   return { props: { page } };
