@@ -1,14 +1,20 @@
-import path from 'node:path';
 import type { NextConfig } from 'next';
 import { STRICT_POLICY, staticSecurityHeaders } from './lib/security/headers';
 
 const nextConfig: NextConfig = {
   // Native and Node-only packages stay outside the bundle (Sequelize otherwise pulls in every
   // dialect's driver, pg-hstore among them, and the build fails).
-  serverExternalPackages: ['sequelize', 'sqlite3', 'nodemailer', 'smtp-server', 'mailparser', 'umzug'],
-  // Rendered pages in memory, so publishing can drop a verdict page at once (see the file).
-  cacheHandler: path.join(process.cwd(), 'lib/cache/memory-cache-handler.mjs'),
-  cacheMaxMemorySize: 0,
+  serverExternalPackages: [
+    'sequelize',
+    'sqlite3',
+    'pg',
+    'pg-hstore',
+    'nodemailer',
+    'smtp-server',
+    'mailparser',
+    'umzug',
+    '@aws-sdk/client-s3',
+  ],
   // Shared caches in front may serve a cached page stale for an hour at most while it refreshes.
   expireTime: 3600,
   // The dev server only hydrates for origins it knows; tests and people open it by address too.

@@ -1,7 +1,7 @@
 /**
  * Benchmark (not a test): the published verdict page /v/[slug] under load, against a static
- * file of similar size served by the same server (`npm start`'s: Next behind the verdict pages'
- * front cache) in the same run. Goal (issue 6): the page's throughput at least 0.8 of the static
+ * file of similar size served by the same server (`npm start`'s: `next start`, no cache of our
+ * own) in the same run; behind nginx, as deployed, see bench/several-processes.ts. Goal (issue 6): the page's throughput at least 0.8 of the static
  * file's. Also measures the page's first-load JavaScript (every <script src> the page's HTML
  * loads, gzipped): goal ≤ 90 KB.
  *
@@ -63,7 +63,7 @@ async function main() {
   const staticPath = path.join(root, 'public', staticName);
   // Placeholder until the page's size is known; rewritten below before the static run.
   writeFileSync(staticPath, 'x');
-  // `npm start`'s server: Next behind the verdict pages' front cache (lib/cache/front-cache.ts).
+  // `npm start`'s server: `next start`, no cache of our own (the proxy's is measured in bench/several-processes.ts).
   const server = spawn(process.execPath, ['--import', 'tsx', path.join(root, 'scripts/start.ts')], {
     cwd: root,
     env: {

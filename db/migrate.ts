@@ -1,5 +1,6 @@
 import { SequelizeStorage, Umzug } from 'umzug';
 import type { QueryInterface, Sequelize } from 'sequelize';
+import { withMigrationLock } from './migration-lock';
 import { migrations } from './migrations';
 import { seeders } from './seeders';
 
@@ -12,10 +13,13 @@ function migrator(sequelize: Sequelize) {
   });
 }
 
-/** Applies every pending migration; returns the names it applied. */
+/**
+ * Applies every pending migration under the migration lock (db/migration-lock.ts), so several
+ * processes starting at once apply each migration once; returns the names it applied.
+ */
 export async function migrate(sequelize: Sequelize): Promise<string[]> {
-  await sequelize.query('PRAGMA journal_mode=WAL');
-  const applied = await migrator(sequelize).up();
+  if (sequelize.getDialect() === 'sqlite') await sequelize.query('PRAGMA journal_mode=WAL');
+  const applied = await withMigrationLock(sequelize, () => migrator(sequelize).up());
   return applied.map((m) => m.name);
 }
 
@@ -37,5 +41,5 @@ export async function seed(sequelize: Sequelize): Promise<string[]> {
     storage: new SequelizeStorage({ sequelize, tableName: 'schema_seeds' }),
     logger: undefined,
   });
-  return (await umzug.up()).map((s) => s.name);
+  return (await withMigrationLock(sequelize, () => umzug.up())).map((s) => s.name);
 }

@@ -18,6 +18,18 @@ const schema = z.object({
    * lib/auth/client-address.ts). Empty: the socket's address is the client's.
    */
   TRUSTED_PROXIES: z.string().default(''),
+  // Several processes (docs/deployment.md): PostgreSQL's pool size per process, and PDFs in an
+  // S3-compatible object store when S3_BUCKET is set (else on the local disk under STORAGE_DIR).
+  PG_POOL_MAX: z.coerce.number().int().positive().default(10),
+  S3_BUCKET: z.string().trim().optional(),
+  S3_ENDPOINT: z.string().url().optional(),
+  S3_REGION: z.string().default('us-east-1'),
+  S3_ACCESS_KEY_ID: z.string().optional(),
+  S3_SECRET_ACCESS_KEY: z.string().optional(),
+  S3_FORCE_PATH_STYLE: z
+    .enum(['true', 'false'])
+    .optional()
+    .transform((v) => (v === undefined ? undefined : v === 'true')),
 });
 
 export type Env = z.infer<typeof schema>;

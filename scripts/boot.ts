@@ -27,15 +27,29 @@ export function loadLocalEnv(): void {
 }
 
 export async function migrateDatabase({ seedDemo }: { seedDemo: boolean }): Promise<void> {
-  const { db, databaseFile, closeDb } = await import('../lib/db');
+  const { db, databaseLabel, closeDb } = await import('../lib/db');
   const { migrate, seed } = await import('../db/migrate');
   const applied = await migrate(db());
-  if (applied.length) console.log(`Migrated ${databaseFile()}: ${applied.join(', ')}`);
+  if (applied.length) console.log(`Migrated ${databaseLabel()}: ${applied.join(', ')}`);
   if (seedDemo) {
     const seeded = await seed(db());
     if (seeded.length) console.log(`Seeded the demo team: ${seeded.join(', ')}`);
   }
   await closeDb();
+}
+
+/** For app processes that must not migrate (PostgreSQL): stop with a clear sentence if the schema is behind. */
+export async function refusePendingMigrations(): Promise<void> {
+  const { db, databaseLabel, closeDb } = await import('../lib/db');
+  const { pendingMigrations } = await import('../db/migrate');
+  const pending = await pendingMigrations(db());
+  await closeDb();
+  if (pending.length) {
+    throw new Error(
+      `The database ${databaseLabel()} has ${pending.length} migration(s) pending (${pending.join(', ')}). ` +
+        'Run `npm run db:migrate` once, then start the app processes (docs/deployment.md).',
+    );
+  }
 }
 
 export async function printDemoSignIns(url: string): Promise<void> {

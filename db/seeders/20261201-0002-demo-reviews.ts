@@ -85,7 +85,7 @@ async function insertStudies(
         updatedAt: now,
       },
     ]);
-    const id = await idOf(sequelize, 'SELECT id FROM studies WHERE teamId = ? AND doi = ?', [teamId, columns.doi]);
+    const id = await idOf(sequelize, 'SELECT id FROM studies WHERE "teamId" = ? AND doi = ?', [teamId, columns.doi]);
     byDoi.set(meta.doi, {
       id,
       design: meta.design,
@@ -130,7 +130,7 @@ async function insertReview(
       updatedAt: now,
     },
   ]);
-  const reviewId = await idOf(sequelize, 'SELECT id FROM reviews WHERE teamId = ? AND slug = ?', [teamId, slug]);
+  const reviewId = await idOf(sequelize, 'SELECT id FROM reviews WHERE "teamId" = ? AND slug = ?', [teamId, slug]);
 
   const mechanisms: MechanismFacts[] = [];
   const mechanismIdByKey = new Map<string, number>();
@@ -147,7 +147,7 @@ async function insertReview(
       desirable: m.desirable ?? 'higher',
     };
     await q.bulkInsert('mechanisms', [{ reviewId, ...row, position, createdAt: now, updatedAt: now }]);
-    const id = await idOf(sequelize, 'SELECT id FROM mechanisms WHERE reviewId = ? AND position = ?', [
+    const id = await idOf(sequelize, 'SELECT id FROM mechanisms WHERE "reviewId" = ? AND position = ?', [
       reviewId,
       position,
     ]);

@@ -21,7 +21,7 @@ async function idOf(sequelize: Sequelize, sql: string, replacements: unknown[]):
 }
 
 async function mechanismIds(sequelize: Sequelize, reviewId: number): Promise<number[]> {
-  const [rows] = (await sequelize.query('SELECT id FROM mechanisms WHERE reviewId = ? ORDER BY position, id', {
+  const [rows] = (await sequelize.query('SELECT id FROM mechanisms WHERE "reviewId" = ? ORDER BY position, id', {
     replacements: [reviewId],
   })) as [{ id: number }[], unknown];
   return rows.map((r) => r.id);
@@ -86,7 +86,7 @@ export async function up({ context: sequelize }: { context: Sequelize }) {
   });
 
   // ---- The closed round ------------------------------------------------------------------------
-  const ladder = await idOf(sequelize, 'SELECT id FROM reviews WHERE teamId = ? AND slug = ?', [
+  const ladder = await idOf(sequelize, 'SELECT id FROM reviews WHERE "teamId" = ? AND slug = ?', [
     teamId,
     'weighted-pull-up-ladder',
   ]);
@@ -117,7 +117,7 @@ export async function up({ context: sequelize }: { context: Sequelize }) {
       updatedAt: at(4),
     },
   ]);
-  const closedRound = await idOf(sequelize, 'SELECT id FROM review_rounds WHERE reviewId = ? AND status = ?', [
+  const closedRound = await idOf(sequelize, 'SELECT id FROM review_rounds WHERE "reviewId" = ? AND status = ?', [
     ladder,
     'closed',
   ]);
@@ -171,7 +171,7 @@ export async function up({ context: sequelize }: { context: Sequelize }) {
       updatedAt: at(4.2),
     },
   ]);
-  const thread = await idOf(sequelize, 'SELECT id FROM review_comments WHERE roundId = ? AND parentId IS NULL', [
+  const thread = await idOf(sequelize, 'SELECT id FROM review_comments WHERE "roundId" = ? AND "parentId" IS NULL', [
     closedRound,
   ]);
   await q.bulkInsert('review_comments', [
@@ -221,7 +221,7 @@ export async function up({ context: sequelize }: { context: Sequelize }) {
   ]);
 
   // ---- The open round --------------------------------------------------------------------------
-  const pinch = await idOf(sequelize, 'SELECT id FROM reviews WHERE teamId = ? AND slug = ?', [
+  const pinch = await idOf(sequelize, 'SELECT id FROM reviews WHERE "teamId" = ? AND slug = ?', [
     teamId,
     'light-daily-pinch-block-lifts',
   ]);
@@ -243,7 +243,7 @@ export async function up({ context: sequelize }: { context: Sequelize }) {
       updatedAt: at(1),
     },
   ]);
-  const openRound = await idOf(sequelize, 'SELECT id FROM review_rounds WHERE reviewId = ? AND status = ?', [
+  const openRound = await idOf(sequelize, 'SELECT id FROM review_rounds WHERE "reviewId" = ? AND status = ?', [
     pinch,
     'open',
   ]);

@@ -33,7 +33,7 @@ async function publish(
     markPublished: boolean;
   },
 ) {
-  const review = await one<{ id: number }>(sequelize, 'SELECT id FROM reviews WHERE teamId = ? AND slug = ?', [
+  const review = await one<{ id: number }>(sequelize, 'SELECT id FROM reviews WHERE "teamId" = ? AND slug = ?', [
     opts.teamId,
     opts.reviewSlug,
   ]);
@@ -53,7 +53,7 @@ async function publish(
       updatedAt: last,
     },
   ]);
-  const pub = await one<{ id: number }>(sequelize, 'SELECT id FROM publications WHERE reviewId = ?', [review.id]);
+  const pub = await one<{ id: number }>(sequelize, 'SELECT id FROM publications WHERE "reviewId" = ?', [review.id]);
   for (const [i, v] of opts.versions.entries()) {
     await v.before?.();
     const snapshot = await buildSnapshot(review.id);
@@ -84,12 +84,15 @@ export async function up({ context: sequelize }: { context: Sequelize }) {
   const day = 24 * 3600 * 1000;
   const now = Date.now();
 
-  const cold = await one<{ id: number; recommendations: string }>(
+  const cold = await one<{ id: number; recommendations: string | Record<string, string> }>(
     sequelize,
-    'SELECT id, recommendations FROM reviews WHERE teamId = ? AND slug = ?',
+    'SELECT id, recommendations FROM reviews WHERE "teamId" = ? AND slug = ?',
     [team.id, 'cold-plunges-after-strength'],
   );
-  const finalAdvice = JSON.parse(cold.recommendations) as Record<string, string>;
+  // A JSON column reads back as text on SQLite and as an object on PostgreSQL.
+  const finalAdvice = (
+    typeof cold.recommendations === 'string' ? JSON.parse(cold.recommendations) : cold.recommendations
+  ) as Record<string, string>;
   await publish(sequelize, q, {
     teamId: team.id,
     reviewSlug: 'cold-plunges-after-strength',

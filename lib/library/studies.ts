@@ -3,7 +3,6 @@ import { conflict, notFound } from '@/lib/api/errors';
 import { recordEvent } from '@/lib/audit/record';
 import { decide, type Actor } from '@/lib/auth/policy';
 import { applyReferenceFields, type CslItem } from '@/lib/citations/csl';
-import { db } from '@/lib/db';
 import { uniqueOrConflict, writeTransaction } from '@/lib/reviews/transaction';
 import { deriveAll, loadReviewData, refreshVerdict, refreshVerdictsOfStudy } from '@/lib/reviews/verdict';
 import { toAppraisalDTO } from '@/lib/reviews/rows';
@@ -14,6 +13,7 @@ import { referenceColumns } from './columns';
 import { storage } from '@/lib/storage';
 import { blindReviewIds } from '@/lib/rounds/freeze';
 import { toStudyDTO } from './dto';
+import { studyHasTag, studyTextMatches } from './study-filters';
 
 /** Appraisals per study, for the given studies. */
 export async function appraisalCounts(studyIds: number[], transaction?: Transaction): Promise<Map<number, number>> {
@@ -48,9 +48,6 @@ const SORT_COLUMNS = {
   design: [['design'], ['title']],
 } as const;
 
-/** SQLite LIKE with the wildcard characters of the search text escaped. */
-const likePattern = (q: string) => `%${q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
-
 /** GET /api/studies: the libraries of the teams where the caller may read studies (the policy decides per team). */
 export async function listStudies(actor: Actor, query: StudyListQuery): Promise<StudyListDTO> {
   const teamIds =
@@ -61,20 +58,8 @@ export async function listStudies(actor: Actor, query: StudyListQuery): Promise<
   if (!teamIds.length) return { studies: [], total: 0, ...page };
   const and: WhereOptions[] = [{ teamId: { [Op.in]: teamIds } }];
   if (query.design) and.push({ design: query.design });
-  if (query.q) {
-    // SQLite's LIKE is case-insensitive for ASCII; the pattern's own % and _ are escaped with \.
-    const pattern = db().escape(likePattern(query.q));
-    const columns = ['title', 'citation', 'doi', 'journal', 'outcome'];
-    // Raw SQL names the table, never the model: a production build renames classes.
-    const matches = columns.map((c) => `${c} LIKE ${pattern} ESCAPE '\\'`).join(' OR ');
-    and.push({ id: { [Op.in]: literal(`(SELECT id FROM studies WHERE ${matches})`) } });
-  }
-  if (query.tag) {
-    const tag = db().escape(query.tag);
-    and.push({
-      id: { [Op.in]: literal(`(SELECT studies.id FROM studies, json_each(studies.tags) WHERE json_each.value = ${tag})`) },
-    });
-  }
+  if (query.q) and.push(studyTextMatches(query.q));
+  if (query.tag) and.push(studyHasTag(query.tag));
   const descending = query.sort.startsWith('-');
   const key = query.sort.replace(/^-/, '') as keyof typeof SORT_COLUMNS;
   const order = SORT_COLUMNS[key].map(([column]) => [column, descending ? 'DESC' : 'ASC'] as [string, string]);

@@ -9,7 +9,6 @@ import { removeVerdict, upsertVerdict, verdictDoc } from '@/lib/search/verdict-i
 import { uniqueSlug } from '@/lib/teams/slug';
 import type { PublishInput } from '@/lib/validation/publishing';
 import { Publication, PublishedVersion, Review, Team, User } from '@/models';
-import { forgetPublication } from './page-cache';
 import { listItem } from './queries';
 import { teamSettings } from './settings';
 import { buildSnapshot } from './snapshot';
@@ -176,20 +175,20 @@ export async function unpublishReview(reviewId: number, actor: Actor, reason: st
     where: { publicationId: publication.id, number: publication.latestNumber },
   });
   if (latest) await afterChange(publication, latest.snapshot as never);
-  else forgetPublication(publication.slug);
   return { slug: publication.slug, withdrawn: { at: publication.withdrawnAt!.toISOString(), reason } };
 }
 
-/** Drops the cached page, refreshes the verdict search document and the team's workbench index. */
+/**
+ * Refreshes the verdict search document and the team's workbench index. The page itself is read
+ * from the database on every render; shared caches keep it at most a second (docs/deployment.md).
+ */
 async function afterChange(publication: Publication, snapshot: Parameters<typeof verdictDoc>[1]) {
-  forgetPublication(publication.slug);
   const team = await Team.findByPk(publication.teamId, { attributes: ['name'] });
   await upsertVerdict(verdictDoc(listItem(publication, snapshot, team?.name ?? snapshot.team.name), snapshot));
   await onReviewChanged(publication.reviewId);
 }
 
-/** After a review is deleted its publication goes with it (foreign key); drop it from the caches too. */
+/** After a review is deleted its publication goes with it (foreign key); drop it from the verdict search too. */
 export async function onPublicationGone(slug: string): Promise<void> {
-  forgetPublication(slug);
   await removeVerdict(slug);
 }

@@ -3,7 +3,6 @@ import { decide, type Actor } from '@/lib/auth/policy';
 import { AppError, notFound } from '@/lib/api/errors';
 import { verdictDoc, verdictIndex, searchVerdictIndex, type VerdictDoc } from '@/lib/search/verdict-index';
 import { Publication, PublishedVersion, Team, User } from '@/models';
-import { cachedPublication, rememberPublication, type CachedPublication } from './page-cache';
 import type { VerdictListItemDTO, VerdictPageDTO, Visibility, VersionSnapshot, VersionSummaryDTO } from './types';
 
 /**
@@ -18,9 +17,22 @@ export function mayRead(actor: Actor | null, pub: { teamId: number; visibility: 
   return decide(actor, 'verdict.read', { teamId: pub.teamId }) === 'allow';
 }
 
-async function loadPublication(slug: string): Promise<CachedPublication | null> {
-  const cached = cachedPublication(slug);
-  if (cached) return cached;
+/** A publication with its versions and publishers' names, as one immutable value. */
+interface LoadedPublication {
+  publication: Pick<
+    Publication,
+    'id' | 'reviewId' | 'teamId' | 'slug' | 'visibility' | 'latestNumber' | 'withdrawnAt' | 'withdrawnReason'
+  >;
+  versions: Pick<PublishedVersion, 'number' | 'createdAt' | 'changeNote' | 'publishedById' | 'snapshot'>[];
+  publisherNames: Map<number, string>;
+}
+
+/**
+ * Read from the database every time: several processes serve the page, and a withdrawal on one
+ * must show on all of them (docs/deployment.md); the shared cache in front keeps a public page
+ * at most a second.
+ */
+async function loadPublication(slug: string): Promise<LoadedPublication | null> {
   const publication = await Publication.findOne({ where: { slug } });
   if (!publication) return null;
   const versions = await PublishedVersion.findAll({
@@ -29,16 +41,14 @@ async function loadPublication(slug: string): Promise<CachedPublication | null> 
   });
   const ids = [...new Set(versions.map((v) => v.publishedById).filter((id): id is number => id !== null))];
   const users = ids.length ? await User.findAll({ where: { id: { [Op.in]: ids } }, attributes: ['id', 'name'] }) : [];
-  const value: CachedPublication = {
+  return {
     publication: publication.get({ plain: true }),
     versions: versions.map((v) => v.get({ plain: true })),
     publisherNames: new Map(users.map((u) => [u.id, u.name])),
   };
-  rememberPublication(slug, value);
-  return value;
 }
 
-function summary(v: CachedPublication['versions'][number], names: Map<number, string>): VersionSummaryDTO {
+function summary(v: LoadedPublication['versions'][number], names: Map<number, string>): VersionSummaryDTO {
   return {
     number: v.number,
     publishedAt: new Date(v.createdAt).toISOString(),

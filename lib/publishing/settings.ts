@@ -22,7 +22,7 @@ export async function teamSettings(teamId: number, transaction?: Transaction): P
     slug: string;
     requirePeerReview: number | boolean;
     coachesMayPublish: number | boolean;
-  }>('SELECT id, name, slug, requirePeerReview, coachesMayPublish FROM teams WHERE id = ?', {
+  }>('SELECT id, name, slug, "requirePeerReview", "coachesMayPublish" FROM teams WHERE id = ?', {
     replacements: [teamId],
     type: QueryTypes.SELECT,
     transaction,
@@ -43,14 +43,11 @@ export async function updateTeamSettings(
   teamId: number,
   values: Partial<Pick<TeamPublishingSettings, 'requirePeerReview' | 'coachesMayPublish'>>,
 ): Promise<void> {
-  const sets: string[] = [];
-  const replacements: unknown[] = [];
+  const sets: Record<string, boolean> = {};
   for (const key of ['requirePeerReview', 'coachesMayPublish'] as const) {
-    if (values[key] !== undefined) {
-      sets.push(`${key} = ?`);
-      replacements.push(values[key] ? 1 : 0);
-    }
+    if (values[key] !== undefined) sets[key] = values[key];
   }
-  if (!sets.length) return;
-  await db().query(`UPDATE teams SET ${sets.join(', ')} WHERE id = ?`, { replacements: [...replacements, teamId] });
+  if (!Object.keys(sets).length) return;
+  // Through the query interface: it quotes the camel-case columns and writes booleans as each engine wants.
+  await db().getQueryInterface().bulkUpdate('teams', sets, { id: teamId });
 }

@@ -1,6 +1,7 @@
 import { Op } from 'sequelize';
 import { bodyPlainText } from '@/lib/publishing/render-body';
 import type { FuzzyIndex } from './engine';
+import { listenForChanges, publishChange } from './change-feed';
 import { Mechanism, Review, Study } from '@/models';
 import {
   BODY_CHARS,
@@ -24,6 +25,11 @@ import {
  * review, its mechanisms or its body change (or it is deleted), `onStudyChanged(studyId)` after a
  * library study changes (or is deleted). A hook for a team whose index was never built does
  * nothing: the lazy build will read the current rows.
+ *
+ * Several processes on PostgreSQL (docs/deployment.md): each keeps its own indexes, and every
+ * hook also tells the others through change-feed.ts (LISTEN/NOTIFY), which apply the same
+ * update from the rows, so a change on one process is found by a search on any other within
+ * moments. A process starts listening before its first build, so no change falls in between.
  */
 
 interface TeamIndex {
@@ -98,7 +104,10 @@ async function build(teamId: number): Promise<TeamIndex> {
   return { fuse: newIndex(docs) };
 }
 
-function teamIndex(teamId: number): Promise<TeamIndex> {
+async function teamIndex(teamId: number): Promise<TeamIndex> {
+  // Missed changes (a dropped listening connection) cannot be replayed: forget every index.
+  await listenForChanges(['review'], updateReview, resetSearchIndexes);
+  await listenForChanges(['study'], updateStudy, resetSearchIndexes);
   let index = teams().get(teamId);
   if (!index) {
     index = build(teamId);
@@ -119,6 +128,17 @@ function addAll(index: TeamIndex, docs: SearchDoc[]) {
 
 /** Keeps the indexes current after a review, its mechanisms or its body changed, or it was deleted. */
 export async function onReviewChanged(reviewId: number): Promise<void> {
+  await updateReview(reviewId);
+  await publishChange({ kind: 'review', id: reviewId });
+}
+
+/** Keeps the indexes current after a library study changed or was deleted. */
+export async function onStudyChanged(studyId: number): Promise<void> {
+  await updateStudy(studyId);
+  await publishChange({ kind: 'study', id: studyId });
+}
+
+async function updateReview(reviewId: number): Promise<void> {
   const review = await Review.findByPk(reviewId);
   for (const [teamId, pending] of teams()) {
     if (review && review.teamId !== teamId) continue;
@@ -130,8 +150,7 @@ export async function onReviewChanged(reviewId: number): Promise<void> {
   }
 }
 
-/** Keeps the indexes current after a library study changed or was deleted. */
-export async function onStudyChanged(studyId: number): Promise<void> {
+async function updateStudy(studyId: number): Promise<void> {
   const study = await Study.findByPk(studyId);
   for (const [teamId, pending] of teams()) {
     if (study && study.teamId !== teamId) continue;

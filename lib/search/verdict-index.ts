@@ -1,4 +1,5 @@
 import type { VerdictListItemDTO, VersionSnapshot } from '@/lib/publishing/types';
+import { listenForChanges, publishChange } from './change-feed';
 import { FuzzyIndex, type FieldSpec } from './engine';
 
 /**
@@ -39,7 +40,13 @@ const FIELDS: FieldSpec<VerdictDoc>[] = [
 type Store = FuzzyIndex<VerdictDoc>;
 const holder = globalThis as unknown as { loadbearingVerdictIndex?: Promise<Store> };
 
-export function verdictIndex(load: () => Promise<VerdictDoc[]>): Promise<Store> {
+/**
+ * The index of published verdicts, built on first use. With several processes on PostgreSQL a
+ * publish, withdraw or delete on another process arrives through change-feed.ts and simply drops
+ * this copy: the next search rebuilds it from the rows (publishing is rare, searching common).
+ */
+export async function verdictIndex(load: () => Promise<VerdictDoc[]>): Promise<Store> {
+  await listenForChanges(['verdict'], async () => resetVerdictIndex(), resetVerdictIndex);
   if (!holder.loadbearingVerdictIndex) {
     const pending = load().then((docs) => new FuzzyIndex<VerdictDoc>(FIELDS, (d) => d.key, docs));
     pending.catch(() => {
@@ -50,15 +57,18 @@ export function verdictIndex(load: () => Promise<VerdictDoc[]>): Promise<Store> 
   return holder.loadbearingVerdictIndex;
 }
 
-/** Replaces a publication's document; a no-op while the index is not built (the build reads current rows). */
+/**
+ * Replaces a publication's document; a no-op while the index is not built (the build reads
+ * current rows). Tells the other processes either way.
+ */
 export async function upsertVerdict(doc: VerdictDoc): Promise<void> {
-  if (!holder.loadbearingVerdictIndex) return;
-  (await holder.loadbearingVerdictIndex).upsert(doc);
+  if (holder.loadbearingVerdictIndex) (await holder.loadbearingVerdictIndex).upsert(doc);
+  await publishChange({ kind: 'verdict', id: 0 });
 }
 
 export async function removeVerdict(slug: string): Promise<void> {
-  if (!holder.loadbearingVerdictIndex) return;
-  (await holder.loadbearingVerdictIndex).remove(slug);
+  if (holder.loadbearingVerdictIndex) (await holder.loadbearingVerdictIndex).remove(slug);
+  await publishChange({ kind: 'verdict', id: 0 });
 }
 
 export function resetVerdictIndex(): void {

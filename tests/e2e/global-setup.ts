@@ -76,7 +76,7 @@ export default async function setup(project: TestProject) {
 
   const port = await freePort();
   const baseURL = `http://127.0.0.1:${port}`;
-  // The production server of `npm start` (Next behind the verdict pages' front cache).
+  // The production server of `npm start` (`next start` after migrating the SQLite file).
   server = spawn(process.execPath, ['--import', 'tsx', path.join(root, 'scripts/start.ts')], {
     cwd: root,
     env: {

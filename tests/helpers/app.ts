@@ -3,6 +3,7 @@ import { migrate } from '@/db/migrate';
 import { resetRateLimits } from '@/lib/auth/rate-limit';
 import { db } from '@/lib/db';
 import { startFakeSmtp, type FakeSmtp } from '@/lib/mail/fake-smtp';
+import { stopListening } from '@/lib/search/change-feed';
 
 /**
  * Migrates this file's database and starts a real SMTP fake that the app's mailer sends to.
@@ -18,6 +19,7 @@ export function useTestApp(): { smtp: () => FakeSmtp } {
   });
   afterAll(async () => {
     await smtp?.close();
+    await stopListening();
     await db().close();
   });
   return { smtp: () => smtp };

@@ -3,7 +3,7 @@ import * as one from '@/app/api/reviews/[id]/route';
 import * as publish from '@/app/api/reviews/[id]/publish/route';
 import * as unpublish from '@/app/api/reviews/[id]/unpublish/route';
 import * as verdicts from '@/app/api/verdicts/route';
-import MemoryCacheHandler from '@/lib/cache/memory-cache-handler.mjs';
+import { getServerSideProps } from '@/pages/v/[slug]/index';
 import { findVerdictPage, verdictPage } from '@/lib/publishing/queries';
 import { updateTeamSettings } from '@/lib/publishing/settings';
 import { db } from '@/lib/db';
@@ -248,31 +248,41 @@ describe('visibility and withdrawal', () => {
   });
 });
 
-describe('the cached public page', () => {
-  it('publishing a new version, changing visibility and withdrawing each drop the rendered /v/[slug] at once', async () => {
-    const { id } = await readyReview(t.coach, t.teamId, { claim: 'Cached: daily max hangs grow finger strength.' });
+describe('the public page /v/[slug]', () => {
+  /** Renders the signed-out page's data as Next would, with the headers it sets. */
+  async function render(slug: string) {
+    const headers = new Map<string, string>();
+    const res = { setHeader: (name: string, value: string) => headers.set(name.toLowerCase(), value) };
+    const result = (await getServerSideProps({ params: { slug }, res } as never)) as {
+      notFound?: true;
+      props?: { page: { latestNumber: number; withdrawn: unknown } };
+    };
+    return { result, cacheControl: headers.get('cache-control'), accelExpires: headers.get('x-accel-expires') };
+  }
+
+  it('reads every change at once and lets shared caches keep it one second, browsers not at all', async () => {
+    const { id } = await readyReview(t.coach, t.teamId, { claim: 'Fresh: daily max hangs grow finger strength.' });
     const first = await t.owner.call(publish.POST, { params: p(id), json: { visibility: 'public' } });
     const slug = first.body.slug as string;
-    const rendered = new MemoryCacheHandler();
-    const key = `/_rc/PAGES/0a1b/$/v/${slug}`;
-    const render = () => rendered.set(key, { kind: 'PAGES', html: '<p>v1</p>', pageData: {} });
+    const v1 = await render(slug);
+    expect(v1.cacheControl).toBe('public, max-age=0, s-maxage=1');
+    // For nginx: an absolute expiry at the end of the second it was rendered in (at most 1 s).
+    const second = Number(v1.accelExpires?.replace(/^@/, ''));
+    expect(Math.abs(second - Math.floor(Date.now() / 1000))).toBeLessThanOrEqual(1);
+    expect(v1.result.props?.page).toMatchObject({ latestNumber: 1 });
 
-    await render();
-    const v2 = await t.owner.call(publish.POST, {
-      params: p(id),
-      json: { visibility: 'public', changeNote: 'Added the second study.' },
-    });
-    expect(v2.status).toBe(201);
-    expect(await rendered.get(key)).toBeNull();
+    await t.owner.call(publish.POST, { params: p(id), json: { visibility: 'public', changeNote: 'Added a study.' } });
+    expect((await render(slug)).result.props?.page).toMatchObject({ latestNumber: 2 });
 
-    await render();
-    await t.owner.call(publish.POST, { params: p(id), json: { visibility: 'team', changeNote: 'Team only for now.' } });
-    expect(await rendered.get(key)).toBeNull();
-    expect(await findVerdictPage(slug, null)).toBeNull();
-
-    await render();
     await t.owner.call(unpublish.POST, { params: p(id), json: { reason: 'A study we relied on was retracted.' } });
-    expect(await rendered.get(key)).toBeNull();
+    expect((await render(slug)).result.props?.page.withdrawn).toMatchObject({
+      reason: 'A study we relied on was retracted.',
+    });
+
+    await t.owner.call(publish.POST, { params: p(id), json: { visibility: 'team', changeNote: 'Team only for now.' } });
+    const teamOnly = await render(slug);
+    expect(teamOnly.result).toEqual({ notFound: true });
+    expect(teamOnly.cacheControl).toBe('public, max-age=0, s-maxage=1');
   });
 
   it('findVerdictPage answers null (a 404) for malformed slugs and versions instead of querying', async () => {

@@ -110,31 +110,8 @@ export async function snapshot(): Promise<Record<string, unknown>> {
   return out;
 }
 
-export const protocol = {
-  exercise: 'Hangboard half-crimp hang',
-  loadValue: 10,
-  loadUnit: 'kg-added',
-  referenceBodyweightKg: 70,
-  referenceMaxAddedKg: 30,
-  secondsPerSet: 10,
-  setsPerSession: 6,
-  sessionsPerDay: 2,
-  daysPerWeek: 4,
-  minHoursBetween: 6,
-  weeks: 8,
-  effort: 'hard',
-};
-
-export const newReview = (teamId: number, extra: Record<string, unknown> = {}) => ({
-  teamId,
-  claim: 'Light daily hangs make fingers stronger in eight weeks.',
-  claimSource: 'A video on a climbing channel',
-  claimUrl: 'https://video.example.test/hangs',
-  protocol,
-  population: { status: 'recreational', injured: false },
-  tags: ['Fingers', 'hangboard'],
-  ...extra,
-});
+// Plain data without vitest, shared with the several-processes test and the benchmarks.
+export { newReview, protocol } from '../../helpers/review-input';
 
 type Handler = Parameters<Client['call']>[0];
 

@@ -34,8 +34,8 @@ beforeAll(async () => {
   const ladder = (await one<{ id: number }>('SELECT id FROM reviews WHERE slug = ?', ['weighted-pull-up-ladder'])).id;
   const pinch = (await one<{ id: number }>('SELECT id FROM reviews WHERE slug = ?', ['light-daily-pinch-block-lifts']))
     .id;
-  const closedRound = (await one<{ id: number }>('SELECT id FROM review_rounds WHERE reviewId = ?', [ladder])).id;
-  const openRound = (await one<{ id: number }>('SELECT id FROM review_rounds WHERE reviewId = ?', [pinch])).id;
+  const closedRound = (await one<{ id: number }>('SELECT id FROM review_rounds WHERE "reviewId" = ?', [ladder])).id;
+  const openRound = (await one<{ id: number }>('SELECT id FROM review_rounds WHERE "reviewId" = ?', [pinch])).id;
   ids = { ladder, pinch, closedRound, openRound };
 });
 

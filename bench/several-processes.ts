@@ -1,0 +1,156 @@
+/**
+ * Benchmark (not a test): the deployment of docs/deployment.md on this machine — nginx with
+ * deploy/nginx/loadbearing.conf in front of two `npm start` processes on PostgreSQL and the S3
+ * fake (tests/helpers/stack.ts). Measures:
+ *   1. the signed-out verdict page through the proxy against a static file of the same size
+ *      served by the same nginx, autocannon at 64 connections (goal: ≥ 0.8 × its throughput,
+ *      p99 < 100 ms);
+ *   2. withdraw (or publish) on one process → every reader through the proxy sees it: the
+ *      largest delay over several rounds (goal ≤ 2 s);
+ *   3. 16 coaches autosaving their reviews (PATCH with the version read) for SAVE_SECONDS on
+ *      PostgreSQL through the proxy: errors other than 409, p99 of a save (goal < 150 ms).
+ *
+ *   npm run build && npx tsx bench/several-processes.ts [seconds per page run] [save seconds] [saves]
+ */
+import { spawn, spawnSync } from 'node:child_process';
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { createRequire } from 'node:module';
+import path from 'node:path';
+import pg from 'pg';
+import { freePort } from '../tests/helpers/pg-cluster';
+import { startStack, type Stack } from '../tests/helpers/stack';
+import { coachSaves, signIn, type SaveFigures } from './save-load';
+
+interface CannonResult {
+  requests: { average: number };
+  latency: { p99: number; p50: number };
+  non2xx: number;
+  errors: number;
+}
+const autocannon = createRequire(import.meta.url)('autocannon') as (
+  opts: Record<string, unknown>,
+) => Promise<CannonResult>;
+
+const SECONDS = Number(process.argv[2] ?? 10);
+const SAVE_SECONDS = Number(process.argv[3] ?? 30);
+const SLUG = 'cold-plunges-after-strength';
+
+async function pageVersusStatic(stack: Stack) {
+  const html = await (await fetch(`${stack.url}/v/${SLUG}`)).text();
+  writeFileSync(path.join(stack.staticDir, 'page.html'), html);
+  const run = async (url: string) => {
+    await autocannon({ url, connections: 64, duration: 2 });
+    return autocannon({ url, connections: 64, duration: SECONDS });
+  };
+  const page = await run(`${stack.url}/v/${SLUG}`);
+  const file = await run(`${stack.url}/static/page.html`);
+  const line = (name: string, r: CannonResult) =>
+    `${name}: ${Math.round(r.requests.average)} req/s, p50 ${r.latency.p50} ms, p99 ${r.latency.p99} ms, ${r.non2xx} non-2xx, ${r.errors} errors`;
+  const ratio = page.requests.average / file.requests.average;
+  console.log(
+    `1. signed-out verdict page through nginx, two app processes (${html.length} bytes), 64 connections, ${SECONDS} s:`,
+  );
+  console.log(`   ${line(`/v/${SLUG}`, page)}`);
+  console.log(`   ${line('static file of the same size', file)}`);
+  console.log(
+    `   ratio ${ratio.toFixed(2)} (goal ≥ 0.8: ${ratio >= 0.8 ? 'met' : 'NOT met'}); page p99 ${page.latency.p99} ms (goal < 100 ms: ${page.latency.p99 < 100 ? 'met' : 'NOT met'})`,
+  );
+}
+
+async function staleness(stack: Stack) {
+  const client = new pg.Client({ connectionString: stack.databaseUrl });
+  await client.connect();
+  const { reviewId } = (await client.query('SELECT "reviewId" FROM publications WHERE slug = $1', [SLUG])).rows[0];
+  await client.end();
+  const cookie = await signIn(stack.apps[0], 'owner@granite-hollow.test');
+  const post = (pathname: string, json: unknown) =>
+    fetch(`${stack.apps[0]}${pathname}`, {
+      method: 'POST',
+      headers: { 'content-type': 'application/json', cookie, origin: stack.apps[0] },
+      body: JSON.stringify(json),
+    });
+  // Readers keep the page hot in nginx's cache meanwhile, as real traffic would.
+  let reading = true;
+  const readers = Array.from({ length: 8 }, async () => {
+    while (reading) await fetch(`${stack.url}/v/${SLUG}`).then((r) => r.arrayBuffer());
+  });
+  const delays: number[] = [];
+  for (let round = 1; round <= 6; round++) {
+    const withdraw = round % 2 === 1;
+    const marker = withdraw ? `Withdrawn in round ${round}.` : `Published again in round ${round}.`;
+    const res = withdraw
+      ? await post(`/api/reviews/${reviewId}/unpublish`, { reason: marker })
+      : await post(`/api/reviews/${reviewId}/publish`, { visibility: 'public', changeNote: marker });
+    const acknowledged = Date.now();
+    if (res.status >= 300) throw new Error(`round ${round}: ${res.status} ${await res.text()}`);
+    while (!(await (await fetch(`${stack.url}/v/${SLUG}`)).text()).includes(marker)) {
+      if (Date.now() - acknowledged > 10_000) throw new Error(`round ${round}: not seen after 10 s`);
+      await new Promise((r) => setTimeout(r, 10));
+    }
+    delays.push(Date.now() - acknowledged);
+    await new Promise((r) => setTimeout(r, 300));
+  }
+  reading = false;
+  await Promise.all(readers);
+  const worst = Math.max(...delays);
+  console.log(
+    `2. publish/withdraw on one process → seen through nginx: ${delays.join(', ')} ms (largest ${worst} ms; goal ≤ 2000 ms: ${worst <= 2000 ? 'met' : 'NOT met'})`,
+  );
+}
+
+export function printSaves(label: string, f: SaveFigures) {
+  console.log(
+    `3. ${label}: 16 coaches × ${SAVE_SECONDS} s: ${f.saves} saves, ${f.conflicts} honest 409s, ${f.errors} other errors, p50 ${f.p50} ms, p99 ${f.p99} ms (goal < 150 ms: ${f.p99 < 150 ? 'met' : 'NOT met'})${f.errors ? `; errors: ${JSON.stringify(f.errorKinds)}` : ''}`,
+  );
+}
+
+/** The same autosave load on the embedded default: one `npm start` on a SQLite file. */
+async function sqliteSaves() {
+  const work = mkdtempSync(path.join(tmpdir(), 'loadbearing-bench-sqlite-'));
+  const port = await freePort();
+  const env = {
+    ...process.env,
+    DATABASE_URL: path.join(work, 'bench.sqlite'),
+    SESSION_SECRET: 'bench-secret-that-is-long-enough-for-iron-session-00',
+    COOKIE_SECURE: 'false',
+    APP_URL: `http://127.0.0.1:${port}`,
+    PORT: String(port),
+    HOST: '127.0.0.1',
+  };
+  spawnSync(process.execPath, ['--import', 'tsx', 'scripts/seed.ts'], { env: { ...env, NODE_ENV: 'development' } });
+  const app = spawn(process.execPath, ['--import', 'tsx', 'scripts/start.ts'], { env, stdio: 'ignore' });
+  try {
+    for (let i = 0; i < 240; i++) {
+      if (await fetch(`${env.APP_URL}/sign-in`).then((r) => r.status < 500, () => false)) break;
+      await new Promise((r) => setTimeout(r, 250));
+    }
+    printSaves('SQLite, one process', await coachSaves(env.APP_URL, SAVE_SECONDS));
+  } finally {
+    app.kill('SIGTERM');
+    await new Promise((r) => app.once('exit', r));
+    rmSync(work, { recursive: true, force: true });
+  }
+}
+
+/** `… saves` as the third argument runs only part 3 (the autosave load). */
+const SAVES_ONLY = process.argv[4] === 'saves';
+
+async function main() {
+  const stack = await startStack({ apps: 2 });
+  try {
+    if (!SAVES_ONLY) {
+      await pageVersusStatic(stack);
+      await staleness(stack);
+    }
+    printSaves('PostgreSQL, two processes behind nginx', await coachSaves(stack.url, SAVE_SECONDS));
+  } finally {
+    await stack.stop();
+  }
+  await sqliteSaves();
+}
+
+main().catch((error) => {
+  console.error(error);
+  process.exit(1);
+});
