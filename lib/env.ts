@@ -13,6 +13,11 @@ const schema = z.object({
   SMTP_PORT: z.coerce.number().int().positive().default(2525),
   MAIL_FROM: z.string().default('Loadbearing <no-reply@loadbearing.test>'),
   MAIL_DROP_DIR: z.string().default('db/data/mail'),
+  // The evidence watch (lib/watch): the bibliographic registry's REST API and the contact it asks
+  // polite clients to send (`npm run dev` points the URL at the local fake).
+  CROSSREF_BASE_URL: z.string().url().default('https://api.crossref.org'),
+  CROSSREF_MAILTO: z.string().email().optional(),
+  CROSSREF_FAKE_PORT: z.coerce.number().int().positive().default(2581),
 });
 
 export type Env = z.infer<typeof schema>;

@@ -2,6 +2,7 @@ import * as foundation from './20261201-0001-foundation';
 import * as workbench from './20261201-0002-workbench';
 import * as peerReview from './20261201-0003-peer-review';
 import * as publishing from './20261201-0004-publishing';
+import * as evidenceWatch from './20261202-05-evidence-watch';
 
 /**
  * Every migration in the order it runs. Listed by hand (not globbed) so the same list works
@@ -13,4 +14,5 @@ export const migrations = [
   { name: '20261201-0002-workbench', ...workbench },
   { name: '20261201-0003-peer-review', ...peerReview },
   { name: '20261201-0004-publishing', ...publishing },
+  { name: '20261202-05-evidence-watch', ...evidenceWatch },
 ];
