@@ -3,6 +3,7 @@ import { Badge } from '@/components/ui/Badge';
 import { SafetyNotice } from '@/components/ui/SafetyNotice';
 import type { VerdictPageDTO } from '@/lib/publishing/types';
 import { AudienceAdvice } from './AudienceAdvice';
+import { EvidenceChangedNotice } from './EvidenceChangedNotice';
 import { longDate, VERDICT_TONE } from './labels';
 import { MechanismRanking } from './MechanismRanking';
 import { ProtocolPlain } from './ProtocolPlain';
@@ -36,6 +37,7 @@ export function VerdictArticle({ page, latest }: { page: VerdictPageDTO; latest:
           <p className="mt-1 text-sm">It stays readable so you can see what was said; do not act on it.</p>
         </div>
       )}
+      {latest && <EvidenceChangedNotice notices={page.evidenceChanged ?? []} />}
       {!latest && (
         <div role="note" className="border-warning-100 bg-warning-50 text-warning-800 rounded-lg border px-4 py-3">
           You are reading version {page.version.number}, an earlier version.{' '}

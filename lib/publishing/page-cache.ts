@@ -1,5 +1,6 @@
 import { forgetRenderedPage } from '@/lib/cache/rendered-pages';
 import type { Publication, PublishedVersion } from '@/models';
+import type { EvidenceChangedDTO } from './types';
 
 /**
  * The verdict page's data, kept in memory per slug and dropped on publish and unpublish (with
@@ -15,6 +16,8 @@ export interface CachedPublication {
   >;
   versions: Pick<PublishedVersion, 'number' | 'createdAt' | 'changeNote' | 'publishedById' | 'snapshot'>[];
   publisherNames: Map<number, string>;
+  /** Notices on studies the latest version cites (lib/watch/flags.ts); dropped with the rest. */
+  evidenceChanged?: EvidenceChangedDTO[];
 }
 
 const store = globalThis as unknown as { loadbearingVerdictCache?: Map<string, CachedPublication> };

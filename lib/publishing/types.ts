@@ -6,6 +6,7 @@ import type {
   RecommendationsDTO,
   VerdictKey,
 } from '@/lib/reviews/types';
+import type { NoticeKind } from '@/lib/watch/notices';
 
 /**
  * What a published version holds (stored as JSON, never changed) and what the pages and routes
@@ -119,6 +120,18 @@ export interface VerdictPageDTO {
   latestNumber: number;
   versions: VersionSummaryDTO[];
   snapshot: VersionSnapshot;
+  /**
+   * Studies this version cites that received a notice since it was published (lib/watch): the
+   * page says so above the verdict. Empty on earlier versions and once a new version is out.
+   */
+  evidenceChanged: EvidenceChangedDTO[];
+}
+
+export interface EvidenceChangedDTO {
+  citation: string;
+  kind: NoticeKind;
+  noticeDoi: string;
+  date: string | null;
 }
 
 export interface PublishResultDTO {

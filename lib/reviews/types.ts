@@ -1,3 +1,5 @@
+import type { EvidenceNotice } from '@/lib/watch/notices';
+
 /**
  * The shapes the workbench's routes send and its pages read. Written first so the server side
  * (lib/reviews, lib/library, app/api) and the client side (components, pages) agree. Fractions
@@ -131,6 +133,8 @@ export interface StudyDTO {
   createdAt: string;
   /** How many appraisals (in any review of the team) use this study. */
   appraisalCount: number;
+  /** The most serious update notice the evidence watch found (retraction, correction …), or null. */
+  notice: EvidenceNotice | null;
 }
 
 export interface AppraisalDTO {

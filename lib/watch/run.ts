@@ -30,6 +30,8 @@ import type { WatchRunDTO, WatchSummaryDTO } from './types';
 
 /** A DOI checked more recently than this is not asked again by the daily run (common practice: a day, less a margin for the job's own drift). */
 export const DAILY_MAX_AGE_MS = 20 * 60 * 60 * 1000;
+/** A "running" run older than this is taken to have died with its process (2,000 DOIs take about a minute). */
+const STALE_RUN_MS = 30 * 60 * 1000;
 /** How often (in lookups) the run writes its progress for the button's progress bar. */
 const PROGRESS_EVERY = 10;
 
@@ -243,5 +245,10 @@ export async function latestRun(teamId: number): Promise<WatchRunDTO | null> {
 
 /** A run already going for the team (the button does not start a second). */
 export async function runningRun(teamId: number): Promise<WatchRun | null> {
-  return WatchRun.findOne({ where: { teamId, status: 'running' }, order: [['id', 'DESC']] });
+  // A run the process never finished (a restart mid-run) stops blocking after this long.
+  const since = new Date(Date.now() - STALE_RUN_MS);
+  return WatchRun.findOne({
+    where: { teamId, status: 'running', createdAt: { [Op.gt]: since } },
+    order: [['id', 'DESC']],
+  });
 }
