@@ -4,6 +4,7 @@ import { EvidenceSuggestion } from '@/models/evidence-suggestion';
 import type { VersionSnapshot } from '@/lib/publishing/types';
 import { searchTeams } from '@/lib/search/index-store';
 import { notFound } from '@/lib/api/errors';
+import { decide, type Actor } from '@/lib/auth/policy';
 import type { SuggestionDTO } from './types';
 
 /**
@@ -80,9 +81,14 @@ export async function suggestionCandidates(teamId: number): Promise<SuggestionCa
   return out;
 }
 
-/** The open suggestions on verdicts this person wrote, newest first. */
-export async function suggestionsFor(userId: number): Promise<SuggestionDTO[]> {
-  const reviews = await Review.findAll({ where: { authorId: userId }, attributes: ['id'] });
+/** The open suggestions on verdicts this person wrote in teams where they still work on reviews, newest first. */
+export async function suggestionsFor(actor: Actor): Promise<SuggestionDTO[]> {
+  const teamIds = [...actor.roles.keys()].filter((teamId) => decide(actor, 'review.read', { teamId }) === 'allow');
+  if (!teamIds.length) return [];
+  const reviews = await Review.findAll({
+    where: { authorId: actor.userId, teamId: { [Op.in]: teamIds } },
+    attributes: ['id'],
+  });
   if (!reviews.length) return [];
   const pubs = await Publication.findAll({
     where: { reviewId: { [Op.in]: reviews.map((r) => r.id) }, withdrawnAt: null },
