@@ -150,7 +150,13 @@ export function scoreReviewData(data: AnyReviewData): ScoredReview {
       .filter((a) => a.mechanismId === mechanismId && derived.has(a.id))
       .map((a) => {
         const d = derived.get(a.id)!;
-        return { direction: appraisalFacts(a).direction, certainty: d.certainty.level, applicability: d.applicability };
+        // The study id lets robustness (docs/scoring.md §9) leave a whole study out at once.
+        return {
+          direction: appraisalFacts(a).direction,
+          certainty: d.certainty.level,
+          applicability: d.applicability,
+          studyId: String(a.studyId),
+        };
       });
   const input: ReviewInput = {
     protocol: {
