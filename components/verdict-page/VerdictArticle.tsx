@@ -8,6 +8,7 @@ import { longDate, VERDICT_TONE } from './labels';
 import { MechanismRanking } from './MechanismRanking';
 import { ProtocolPlain } from './ProtocolPlain';
 import { ReferenceList } from './ReferenceList';
+import { VerdictFirmness } from './VerdictFirmness';
 
 /** Section headings share one look; each section is labelled by its heading for landmark navigation. */
 function Section({ id, title, children }: { id: string; title: string; children: React.ReactNode }) {
@@ -78,6 +79,12 @@ export function VerdictArticle({ page, latest }: { page: VerdictPageDTO; latest:
       </header>
 
       <SafetyNotice />
+
+      {s.robustness && (
+        <Section id="firmness" title="How firm is this verdict?">
+          <VerdictFirmness robustness={s.robustness} />
+        </Section>
+      )}
 
       <Section id="protocol" title="The protocol, in everyday words">
         <ProtocolPlain everyday={s.everyday} />

@@ -11,6 +11,7 @@ import { formatNumber } from '@/lib/scoring/format';
 import { MIN_EVIDENCE_WEIGHT } from '@/lib/scoring/constants';
 import { useVerdict } from '@/lib/swr/use-verdict';
 import { LikelihoodScale } from './LikelihoodScale';
+import { RobustnessPanel } from './RobustnessPanel';
 
 const VERDICT_TONE: Record<VerdictKey, BadgeTone> = {
   supported: 'success',
@@ -149,6 +150,8 @@ export function VerdictPanel({ reviewId, mechanisms }: { reviewId: number; mecha
               </ol>
             )}
           </div>
+
+          {data.robustness && <RobustnessPanel verdict={data} />}
 
           <details className="group border-line bg-paper-sunken/60 rounded-md border" data-testid="verdict-working">
             <summary className="text-brand cursor-pointer list-none px-3 py-2.5 text-sm font-semibold marker:hidden">

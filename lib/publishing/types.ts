@@ -50,6 +50,16 @@ export interface EverydayProtocol {
   loadTableNote: string | null;
 }
 
+/** What the verdict rests on and what would change it, in words for athletes (docs/scoring.md §9). */
+export interface SnapshotRobustness {
+  /** "This verdict rests on …" */
+  restsOn: string;
+  /** "It would change if …" */
+  wouldChange: string;
+  fragility: 1 | 2 | null;
+  pivotal: { studyId: number; citation: string }[];
+}
+
 export interface VersionSnapshot {
   schema: 1;
   title: string;
@@ -76,6 +86,8 @@ export interface VersionSnapshot {
   team: { id: number; name: string; slug: string };
   authors: string[];
   effort: Effort | null;
+  /** Absent from versions published before verdicts said how firm they are. */
+  robustness?: SnapshotRobustness;
 }
 
 export interface VersionSummaryDTO {

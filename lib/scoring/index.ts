@@ -21,5 +21,6 @@ export {
   type MechanismInput,
   type MechanismScore,
 } from './mechanism';
+export * from './robustness';
 export * from './types';
 export * from './verdict';
