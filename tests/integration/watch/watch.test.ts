@@ -7,7 +7,11 @@ import { DEMO_NOTICES, startFakeCrossrefServer, type FakeCrossrefServer } from '
 import { forgetPublication } from '@/lib/publishing/page-cache';
 import { verdictPage } from '@/lib/publishing/queries';
 import { runWatch } from '@/lib/watch/run';
-import { Publication, Study, Team } from '@/models';
+import { Appraisal, Publication, Study, Team, User } from '@/models';
+import * as dismiss from '@/app/api/evidence-suggestions/[id]/dismiss/route';
+import { loadActor } from '@/lib/auth/actor';
+import { resetSearchIndexes } from '@/lib/search/index-store';
+import { suggestionsFor } from '@/lib/watch/suggestions';
 import { DoiCheck } from '@/models/doi-check';
 import { EvidenceFlag } from '@/models/evidence-flag';
 import { Client, useTestApp } from '../../helpers/app';
@@ -219,5 +223,69 @@ describe('evidence watch routes', () => {
     expect((await athlete.call(watchRoute.GET, { params })).status).toBe(403);
     expect((await athlete.call(watchRoute.POST, { method: 'POST', params })).status).toBe(403);
     expect((await new Client('10.9.9.9').call(watchRoute.GET, { params })).status).toBe(401);
+  });
+});
+
+describe('new evidence to consider', () => {
+  it('offers a study added after publishing, with a shared tag and a title that matches a mechanism, to the verdict’s author only; never applied; dismissable', async () => {
+    const pub = (await Publication.findOne({ where: { slug: 'cold-plunges-after-strength' } }))!;
+    const snapshot = (await verdictPage(pub.slug, null)).snapshot;
+    const mechanism = snapshot.mechanisms[0];
+    const author = (await User.findOne({ where: { email: 'coach2@granite-hollow.test' } }))!;
+    const appraisalsBefore = await Appraisal.count({ where: { reviewId: pub.reviewId } });
+    const make = (title: string, tags: string[]) =>
+      Study.create({
+        teamId,
+        createdById: author.id,
+        csl: { type: 'article-journal', title },
+        doi: null,
+        title,
+        fingerprint: title.toLowerCase(),
+        year: 2026,
+        journal: null,
+        citation: `Newcomb, 2026 ${tags.length}`,
+        design: null,
+        population: null,
+        n: null,
+        intensity: null,
+        durationWeeks: null,
+        outcome: null,
+        effect: null,
+        tags,
+        pdfKey: null,
+      });
+    const close = await make(`${mechanism.name} in trained lifters`, [snapshot.tags[0]]);
+    // Same words, no shared tag: not offered.
+    await make(`${mechanism.name} in rowers`, ['unrelated-tag']);
+    resetSearchIndexes();
+
+    const run = await runWatch(teamId, { trigger: 'member', client: noWait });
+    expect(run.status).toBe('done');
+    expect(run.summary!.suggestions).toBe(1);
+    expect(await Appraisal.count({ where: { reviewId: pub.reviewId } })).toBe(appraisalsBefore);
+
+    const offered = await suggestionsFor((await loadActor(author.id))!);
+    expect(offered).toEqual([
+      expect.objectContaining({
+        slug: pub.slug,
+        mechanism: mechanism.name,
+        study: expect.objectContaining({ id: close.id }),
+      }),
+    ]);
+    const owner = (await User.findOne({ where: { email: 'owner@granite-hollow.test' } }))!;
+    expect(await suggestionsFor((await loadActor(owner.id))!)).toEqual([]);
+
+    const params = { id: String(offered[0].id) };
+    const otherCoach = new Client('10.9.1.1');
+    await otherCoach.call(signIn.POST, { json: { email: 'coach@granite-hollow.test', password: 'loadbearing-demo' } });
+    expect((await otherCoach.call(dismiss.POST, { method: 'POST', params })).status).toBe(403);
+    const me = new Client('10.9.1.2');
+    await me.call(signIn.POST, { json: { email: 'coach2@granite-hollow.test', password: 'loadbearing-demo' } });
+    expect((await me.call(dismiss.POST, { method: 'POST', params })).status).toBe(200);
+    expect(await suggestionsFor((await loadActor(author.id))!)).toEqual([]);
+
+    // A later run does not offer it again.
+    const again = await runWatch(teamId, { trigger: 'member', client: noWait });
+    expect(again.summary!.suggestions).toBe(0);
   });
 });
