@@ -33,7 +33,7 @@ const mechanisms = [{ id: 7, name: 'Tendon stiffness', stated: true, term: 'like
 describe('robustnessWords', () => {
   it('lists the pivotal study, the prior bound in words and numbers, and the deciding certainty call', () => {
     const words = robustnessWords(r, 'supported', mechanisms);
-    expect(words.lead).toBe('Holds up unless:');
+    expect(words.lead).toBe('The verdict stays “Holds up” unless:');
     expect(words.conditions).toEqual([
       'Hale (2021) is left out (it would read “Not enough evidence”)',
       'the outcome’s prior is below 0.24 (unlikely); the review uses 0.5',
@@ -56,7 +56,7 @@ describe('robustnessWords', () => {
     };
     const words = robustnessWords(firm, 'supported', mechanisms);
     expect(words.conditions).toEqual([]);
-    expect(words.lead).toMatch(/^Holds up whichever study or pair of studies is left out/);
+    expect(words.lead).toMatch(/^The verdict stays “Holds up” whichever study or pair of studies is left out/);
   });
 
   it('names the pair when two studies together change it', () => {
