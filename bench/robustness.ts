@@ -15,6 +15,7 @@ import { performance } from 'node:perf_hooks';
 import { robustness } from '../lib/scoring/robustness';
 import type { ReviewInput } from '../lib/scoring/verdict';
 import type { Appraisal } from '../lib/scoring/types';
+import { mulberry32 } from './seeded-random';
 
 const WARMUP = 20;
 const RUNS = 200;
@@ -23,17 +24,6 @@ const MECHANISMS = 12;
 const OUTCOME_APPRAISALS = 60;
 const PER_MECHANISM = 20; // 60 + 12 × 20 = 300 appraisals
 
-/** A seeded generator, so every run benchmarks the same review. */
-function mulberry32(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 const random = mulberry32(20261202);
 const certainties = ['high', 'moderate', 'low', 'very-low'] as const;
 let next = 0;

@@ -13,12 +13,12 @@ import { VERDICT_LABEL, VERDICT_THRESHOLDS } from '@/lib/scoring/constants';
 
 const ROW = 22;
 const TOP = 26;
-const LABEL = 118;
-const PLOT = 190;
-const RIGHT = 12;
+const LABEL = 138;
+const PLOT = 172;
+const RIGHT = 20;
 const WIDTH = LABEL + PLOT + RIGHT;
 const x = (p: number) => LABEL + Math.max(0, Math.min(1, p)) * PLOT;
-const shorten = (text: string, max = 18) => (text.length > max ? `${text.slice(0, max - 1)}…` : text);
+const shorten = (text: string, max = 20) => (text.length > max ? `${text.slice(0, max - 1)}…` : text);
 
 export function LeaveOneOutChart({
   rows,
@@ -38,7 +38,7 @@ export function LeaveOneOutChart({
     { key: 'all', label: 'All studies', probability: outcomeProbability, verdict, changed: false, whole: true },
     ...rows.map((r) => ({
       key: String(r.studyId),
-      label: `Without ${r.citation}`,
+      label: r.citation,
       probability: r.outcomeProbability,
       verdict: r.verdict,
       changed: r.changed,
@@ -91,10 +91,13 @@ export function LeaveOneOutChart({
             </text>
           </g>
         ))}
+        <text x={LABEL - 18} y={TOP - 12} textAnchor="end" className="fill-chalk-700 text-[10px]" aria-hidden="true">
+          Left out
+        </text>
         {all.map((row, i) => {
           const y = TOP + i * ROW + ROW / 2;
           const cx = x(row.probability);
-          const name = `${row.label}: ${percent(row.probability)}, ${row.whole ? '' : row.changed ? 'the verdict changes to ' : 'still '}${VERDICT_LABEL[row.verdict]}`;
+          const name = `${row.whole ? row.label : `Without ${row.label}`}: ${percent(row.probability)}, ${row.whole ? '' : row.changed ? 'the verdict changes to ' : 'still '}${VERDICT_LABEL[row.verdict]}`;
           return (
             <g
               key={row.key}
@@ -176,7 +179,7 @@ export function LeaveOneOutChart({
             {all.map((row) => (
               <tr key={row.key} className="border-line border-b last:border-b-0">
                 <th scope="row" className="py-1 pr-2 font-normal">
-                  {row.whole ? 'Nothing (all studies)' : row.label.replace(/^Without /, '')}
+                  {row.whole ? 'Nothing (all studies)' : row.label}
                 </th>
                 <td className="py-1 pr-2 text-right tabular-nums">{percent(row.probability)}</td>
                 <td className="py-1">

@@ -18,7 +18,7 @@ export interface NamedMechanism {
 }
 
 export interface RobustnessWords {
-  /** "Holds up unless:" or a sentence that needs no list. */
+  /** "The verdict stays “Holds up” unless:", or a sentence that needs no list. */
   lead: string;
   /** Each completes "… unless". Empty when nothing a coach can move changes the verdict. */
   conditions: string[];
@@ -49,7 +49,7 @@ function outcomePriorClauses(r: RobustnessDTO['outcomePrior']): string[] {
 
 /**
  * @example
- * robustnessWords(dto, 'supported', mechanisms).lead; // 'Holds up unless:'
+ * robustnessWords(dto, 'supported', mechanisms).lead; // "The verdict stays “Holds up” unless:"
  */
 export function robustnessWords(
   r: RobustnessDTO,
@@ -99,8 +99,8 @@ export function robustnessWords(
   return {
     lead:
       conditions.length === 0
-        ? `${label} whichever study or pair of studies is left out, for any outcome prior, and whichever certainty call moves one level.`
-        : `${label} unless:`,
+        ? `The verdict stays “${label}” whichever study or pair of studies is left out, for any outcome prior, and whichever certainty call moves one level.`
+        : `The verdict stays “${label}” unless:`,
     conditions,
     priors,
   };

@@ -89,6 +89,7 @@ describe('GET /api/reviews/:id/verdict', () => {
       'label',
       'mechanisms',
       'outcome',
+      'robustness',
       'steps',
       'verdict',
     ]);
