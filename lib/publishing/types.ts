@@ -134,9 +134,9 @@ export interface VerdictPageDTO {
   snapshot: VersionSnapshot;
   /**
    * Studies this version cites that received a notice since it was published (lib/watch): the
-   * page says so above the verdict. Empty on earlier versions and once a new version is out.
+   * page says so above the verdict. Empty (or absent) on earlier versions and once a new version is out.
    */
-  evidenceChanged: EvidenceChangedDTO[];
+  evidenceChanged?: EvidenceChangedDTO[];
 }
 
 export interface EvidenceChangedDTO {

@@ -87,7 +87,7 @@ describe('evidence watch', () => {
     expect(await studyNotice(CORRECTED)).toBeNull();
 
     const page = await verdictPage('cold-plunges-after-strength', null);
-    expect(page.evidenceChanged.map((n) => n.kind)).toEqual(['retraction']);
+    expect(page.evidenceChanged!.map((n) => n.kind)).toEqual(['retraction']);
     const flag = (await EvidenceFlag.findOne({
       where: { publicationId: await pubId('cold-plunges-after-strength') },
     }))!;
