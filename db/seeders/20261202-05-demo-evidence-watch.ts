@@ -1,6 +1,6 @@
 import type { Sequelize } from 'sequelize';
 import { DEMO_NOTICES } from '../../lib/citations/fake-crossref-server';
-import { flagCandidates } from '../../lib/watch/flags';
+import { flagCandidates, flagRow } from '../../lib/watch/flags';
 import type { EvidenceNotice } from '../../lib/watch/notices';
 import { DEMO_TEAM } from './demo-accounts';
 
@@ -48,19 +48,7 @@ export async function up({ context: sequelize }: { context: Sequelize }) {
   if (!flags.length) throw new Error('Demo seed: no published verdict cites the retracted demo study');
   await q.bulkInsert(
     'evidence_flags',
-    flags.map((f) => ({
-      teamId: team.id,
-      publicationId: f.publicationId,
-      versionNumber: f.versionNumber,
-      studyId: f.study.id,
-      kind: f.notice.kind,
-      noticeDoi: f.notice.noticeDoi,
-      noticeDate: f.notice.date,
-      reason: f.reason,
-      dryRun: JSON.stringify(f.dryRun),
-      createdAt: now,
-      updatedAt: now,
-    })),
+    flags.map((f) => ({ ...flagRow(f), dryRun: JSON.stringify(f.dryRun), createdAt: now, updatedAt: now })),
   );
 }
 

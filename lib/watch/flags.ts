@@ -25,6 +25,21 @@ export interface FlagCandidate {
   dryRun: DryRunDTO | null;
 }
 
+/** The row a candidate becomes (the run creates it; the demo seed inserts it with the query interface). */
+export function flagRow(f: FlagCandidate) {
+  return {
+    teamId: f.teamId,
+    publicationId: f.publicationId,
+    versionNumber: f.versionNumber,
+    studyId: f.study.id,
+    kind: f.notice.kind,
+    noticeDoi: f.notice.noticeDoi,
+    noticeDate: f.notice.date,
+    reason: f.reason,
+    dryRun: f.dryRun,
+  };
+}
+
 /** "retracted on 20 Nov 2026" */
 export function noticeWhat(n: Pick<EvidenceNotice, 'kind' | 'date'>): string {
   return `${NOTICE_KINDS[n.kind].past}${n.date ? ` on ${formatNoticeDate(n.date)}` : ''}`;

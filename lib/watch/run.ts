@@ -10,7 +10,7 @@ import { EvidenceFlag } from '@/models/evidence-flag';
 import { EvidenceSuggestion } from '@/models/evidence-suggestion';
 import { WatchRun } from '@/models/watch-run';
 import { lookupWork, type CrossrefClientOptions } from './crossref';
-import { dryRunSentence, flagCandidates, noticeWhat, type FlagCandidate } from './flags';
+import { dryRunSentence, flagCandidates, flagRow, noticeWhat, type FlagCandidate } from './flags';
 import { headlineNotice, type EvidenceNotice } from './notices';
 import { suggestionCandidates } from './suggestions';
 import type { WatchRunDTO, WatchSummaryDTO } from './types';
@@ -151,22 +151,7 @@ export async function runWatch(teamId: number, options: WatchOptions): Promise<W
         else await DoiCheck.create({ doi, ...answer, checkedAt }, { transaction });
       }
       for (const { study, notice } of studyUpdates) await study.update({ evidenceNotice: notice }, { transaction });
-      for (const f of flags) {
-        await EvidenceFlag.create(
-          {
-            teamId,
-            publicationId: f.publicationId,
-            versionNumber: f.versionNumber,
-            studyId: f.study.id,
-            kind: f.notice.kind,
-            noticeDoi: f.notice.noticeDoi,
-            noticeDate: f.notice.date,
-            reason: f.reason,
-            dryRun: f.dryRun,
-          },
-          { transaction },
-        );
-      }
+      for (const f of flags) await EvidenceFlag.create(flagRow(f), { transaction });
       if (suggestions.length)
         await EvidenceSuggestion.bulkCreate(
           suggestions.map((s) => ({ ...s, dismissedAt: null, dismissedById: null })),
