@@ -86,7 +86,10 @@ export function EvidenceWatchPanel({ teamId, canRun }: { teamId: number; canRun:
                       </Link>{' '}
                       <NoticeBadge notice={f.notice} />
                     </p>
-                    <p className="text-ink-muted mt-1">{f.reason}</p>
+                    <p className="text-ink-muted mt-1">
+                      {f.reason}
+                      {f.dryRunText && ` ${f.dryRunText}`}
+                    </p>
                   </li>
                 ))}
               </ul>

@@ -78,6 +78,9 @@ export const POLICY = {
   // a "new evidence to consider" offer.
   'evidence.watch.run': roles('owner', 'coach'),
   'evidence.watch.read': roles(...STAFF),
+  // A flag's dry run is the engine's verdict of the review as it is now: not for reviewers, who
+  // may be scoring a new round of it blind.
+  'evidence.dryrun.read': roles('owner', 'coach'),
   'evidence.suggestion.dismiss': authorOrOwner,
 } satisfies Record<string, Rule>;
 

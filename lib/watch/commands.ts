@@ -9,8 +9,11 @@ import type { EvidenceFlagDTO, WatchRunDTO } from './types';
  * from asking twice a day); it runs in the background and the page polls its progress.
  */
 
-export async function watchStatus(teamId: number): Promise<{ run: WatchRunDTO | null; flags: EvidenceFlagDTO[] }> {
-  const [run, flags] = await Promise.all([latestRun(teamId), standingFlags(teamId)]);
+export async function watchStatus(
+  teamId: number,
+  withDryRun: boolean,
+): Promise<{ run: WatchRunDTO | null; flags: EvidenceFlagDTO[] }> {
+  const [run, flags] = await Promise.all([latestRun(teamId), standingFlags(teamId, withDryRun)]);
   return { run, flags };
 }
 

@@ -45,8 +45,8 @@ export function noticeWhat(n: Pick<EvidenceNotice, 'kind' | 'date'>): string {
   return `${NOTICE_KINDS[n.kind].past}${n.date ? ` on ${formatNoticeDate(n.date)}` : ''}`;
 }
 
-export function dryRunSentence(d: DryRunDTO | null): string | null {
-  if (!d) return null;
+export function dryRunSentence(d: DryRunDTO | null): string {
+  if (!d) return 'No appraisal of the review uses it now, so the verdict does not depend on it.';
   const p = `${Math.round(d.outcomeProbability * 100)} %`;
   return d.changed
     ? `Without it the verdict would become “${d.verdictLabel}” (now “${d.currentLabel}”; outcome probability ${p}).`
@@ -83,10 +83,8 @@ export async function flagCandidates(
       const notice = noticeByStudy.get(ref.studyId);
       if (!notice || have.has(key(pub.id, pub.latestNumber, ref.studyId, notice.noticeDoi))) continue;
       const dryRun = await dryRunWithout(pub.reviewId, ref.studyId);
-      const reason = [
-        `${ref.citation} was ${noticeWhat(notice)} (notice doi:${notice.noticeDoi}).`,
-        dryRunSentence(dryRun) ?? 'No appraisal of the review uses it now, so the verdict does not depend on it.',
-      ].join(' ');
+      // The reason says what happened; the dry run is kept beside it (engine numbers are not for every reader).
+      const reason = `${ref.citation} was ${noticeWhat(notice)} (notice doi:${notice.noticeDoi}).`;
       out.push({
         teamId,
         publicationId: pub.id,
@@ -104,8 +102,12 @@ export async function flagCandidates(
   return out;
 }
 
-/** The flags standing on the team's live publications (the latest version's), newest first. */
-export async function standingFlags(teamId: number): Promise<EvidenceFlagDTO[]> {
+/**
+ * The flags standing on the team's live publications (the latest version's), newest first.
+ * `withDryRun` false leaves the dry run out: it is the engine's verdict of the review as it is
+ * now, which a reviewer scoring a new round blind must not see.
+ */
+export async function standingFlags(teamId: number, withDryRun: boolean): Promise<EvidenceFlagDTO[]> {
   const live = await livePublications(teamId);
   if (!live.length) return [];
   const flags = await EvidenceFlag.findAll({
@@ -131,7 +133,8 @@ export async function standingFlags(teamId: number): Promise<EvidenceFlagDTO[]> 
       study: { id: f.studyId, citation: study?.citation ?? 'A removed study', doi: study?.doi ?? null },
       notice: { kind: f.kind as EvidenceNotice['kind'], noticeDoi: f.noticeDoi, date: f.noticeDate },
       reason: f.reason,
-      dryRun: f.dryRun,
+      dryRun: withDryRun ? f.dryRun : null,
+      dryRunText: withDryRun ? dryRunSentence(f.dryRun) : null,
       flaggedAt: f.createdAt.toISOString(),
     };
   });

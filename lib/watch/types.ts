@@ -23,7 +23,10 @@ export interface EvidenceFlagDTO {
   study: { id: number; citation: string; doi: string | null };
   notice: EvidenceNotice;
   reason: string;
+  /** Null for readers who may not see engine numbers (`evidence.dryrun.read`). */
   dryRun: DryRunDTO | null;
+  /** The dry run in a sentence ("Without it the verdict would …"). */
+  dryRunText: string | null;
   flaggedAt: string;
 }
 

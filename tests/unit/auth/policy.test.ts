@@ -51,6 +51,7 @@ const EXPECTED: Record<Action, Row> = {
   'search.read': { owner: A, coach: A, reviewer: A, athlete: F },
   'evidence.watch.run': { owner: A, coach: A, reviewer: F, athlete: F },
   'evidence.watch.read': { owner: A, coach: A, reviewer: A, athlete: F },
+  'evidence.dryrun.read': { owner: A, coach: A, reviewer: F, athlete: F },
   'evidence.suggestion.dismiss': { owner: A, coach: F, reviewer: F, athlete: F },
 };
 

@@ -1,11 +1,12 @@
 import { route } from '@/lib/auth/handler';
+import { decide } from '@/lib/auth/policy';
 import { startMemberRun, watchStatus } from '@/lib/watch/commands';
 import { watchParams, watchRunQuery } from '@/lib/validation/watch';
 
 // GET /api/teams/:teamId/evidence-watch — the latest run (progress or summary) and the verdicts flagged "evidence changed".
-export const GET = route({ params: watchParams }, async ({ params, authorize }) => {
+export const GET = route({ params: watchParams }, async ({ params, authorize, actor }) => {
   authorize('evidence.watch.read', { teamId: params.teamId }, 'That team');
-  return watchStatus(params.teamId);
+  return watchStatus(params.teamId, decide(actor, 'evidence.dryrun.read', { teamId: params.teamId }) === 'allow');
 });
 
 // POST /api/teams/:teamId/evidence-watch — run the watch now (owners and coaches); 202 with the run, or 200 when it is over with ?wait=1.
