@@ -13,21 +13,10 @@ import { performance } from 'node:perf_hooks';
 import { scoreReview, type ReviewInput } from '../lib/scoring/verdict';
 import { metaAnalysis } from '../lib/stats/meta-analysis';
 import type { Appraisal } from '../lib/scoring/types';
+import { mulberry32 } from './seeded-random';
 
 const WARMUP = 30;
 const RUNS = 300;
-
-/** A seeded generator, so every run benchmarks the same review. */
-function mulberry32(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 const random = mulberry32(20240603);
 const pick = <T>(list: readonly T[]): T => list[Math.floor(random() * list.length)];

@@ -30,6 +30,11 @@ const schema = z.object({
     .enum(['true', 'false'])
     .optional()
     .transform((v) => (v === undefined ? undefined : v === 'true')),
+  // The evidence watch (lib/watch): the bibliographic registry's REST API and the contact it asks
+  // polite clients to send (`npm run dev` points the URL at the local fake).
+  CROSSREF_BASE_URL: z.string().url().default('https://api.crossref.org'),
+  CROSSREF_MAILTO: z.string().email().optional(),
+  CROSSREF_FAKE_PORT: z.coerce.number().int().positive().default(2581),
 });
 
 export type Env = z.infer<typeof schema>;

@@ -1,5 +1,6 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes } from 'sequelize';
 import { db } from '@/lib/db';
+import type { EvidenceNotice } from '@/lib/watch/notices';
 
 /**
  * One entry of a team's evidence library: the reference as CSL-JSON plus what the appraisal
@@ -29,6 +30,8 @@ export class Study extends Model<InferAttributes<Study>, InferCreationAttributes
   declare tags: string[];
   /** Storage key of the uploaded PDF (lib/storage), never a path the client sees. */
   declare pdfKey: string | null;
+  /** The most serious update notice the evidence watch found (retraction, correction …), or null. */
+  declare evidenceNotice: CreationOptional<EvidenceNotice | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -55,6 +58,7 @@ Study.init(
     effect: { type: DataTypes.JSON, allowNull: true },
     tags: { type: DataTypes.JSON, allowNull: false },
     pdfKey: { type: DataTypes.STRING(300), allowNull: true },
+    evidenceNotice: { type: DataTypes.JSON, allowNull: true },
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,
   },

@@ -18,6 +18,12 @@ async function main() {
     ? null
     : await startFakeDoiServer({ port: Number(process.env.DOI_FAKE_PORT ?? 2580) });
   if (doiFake) console.log(`DOI fake listening on ${doiFake.url}`);
+  // The evidence watch asks a local fake of the registry (demo DOIs; one demo retraction) unless CROSSREF_BASE_URL is set.
+  const { startFakeCrossrefServer } = await import('../lib/citations/fake-crossref-server');
+  const crossrefFake = process.env.CROSSREF_BASE_URL
+    ? null
+    : await startFakeCrossrefServer({ port: Number(process.env.CROSSREF_FAKE_PORT ?? 2581) });
+  if (crossrefFake) console.log(`Registry fake listening on ${crossrefFake.url}`);
 
   const port = process.env.PORT ?? '3000';
   const next = spawn(process.execPath, [path.resolve('node_modules/next/dist/bin/next'), 'dev', '-p', port], {
@@ -27,6 +33,7 @@ async function main() {
       NEXT_TELEMETRY_DISABLED: '1',
       SMTP_PORT: String(smtp.port),
       DOI_BASE_URL: doiFake?.url ?? process.env.DOI_BASE_URL,
+      CROSSREF_BASE_URL: crossrefFake?.url ?? process.env.CROSSREF_BASE_URL,
     },
   });
   await printDemoSignIns(`http://localhost:${port}`);
@@ -37,6 +44,7 @@ async function main() {
   next.on('exit', async (code) => {
     await smtp.close();
     await doiFake?.close();
+    await crossrefFake?.close();
     process.exit(code ?? 0);
   });
 }

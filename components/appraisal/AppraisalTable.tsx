@@ -1,6 +1,7 @@
 'use client';
 
 import Link from 'next/link';
+import { NoticeBadge } from '@/components/library/NoticeBadge';
 import { Button } from '@/components/ui/Button';
 import { cn } from '@/components/ui/cn';
 import { CERTAINTY_LABEL, DESIGN_LABEL, DIRECTION_LABEL, percent } from '@/components/review/labels';
@@ -76,6 +77,7 @@ export function AppraisalTable({
                       <span className="text-ink-muted line-clamp-2 block text-xs" title={study.title}>
                         {study.title}
                       </span>
+                      <NoticeBadge notice={study.notice} />
                     </>
                   ) : (
                     <span className="text-ink-muted">Study #{a.studyId}</span>

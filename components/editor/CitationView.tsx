@@ -3,6 +3,7 @@
 import { NodeViewWrapper, type ReactNodeViewProps } from '@tiptap/react';
 import { cn } from '@/components/ui/cn';
 import { useOptionalWorkbenchContext } from '@/components/review/workbench-context';
+import { noticeLine } from '@/lib/watch/notices';
 
 /** An inline author–year citation, looked up in the library each time it renders. */
 export function CitationView({ node, selected }: ReactNodeViewProps) {
@@ -16,14 +17,22 @@ export function CitationView({ node, selected }: ReactNodeViewProps) {
       contentEditable={false}
       data-testid="citation"
       data-study-id={id ?? ''}
-      title={study ? `${study.title}${study.journal ? ` — ${study.journal}` : ''}` : undefined}
+      data-notice={study?.notice?.kind}
+      title={
+        study
+          ? `${study.title}${study.journal ? ` — ${study.journal}` : ''}${study.notice ? ` — ${noticeLine(study.notice)}` : ''}`
+          : undefined
+      }
       className={cn(
         'bg-rope-50 text-accent-text decoration-rope-300 mx-px rounded-sm px-0.5 decoration-dotted',
         !study && 'text-ink-muted italic',
+        // A study under a notice is struck through where it is cited, so the author sees it in the text.
+        study?.notice && 'text-danger-800 line-through decoration-solid',
         selected && 'ring-rope-500 ring-2',
       )}
     >
-      ({text})
+      ({text}
+      {study?.notice && <span className="sr-only"> — {noticeLine(study.notice)}</span>})
     </NodeViewWrapper>
   );
 }

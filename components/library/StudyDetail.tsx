@@ -24,6 +24,7 @@ import { ApiError, apiFetch, errorMessage, fetcher } from '@/lib/swr/fetcher';
 import { isStudiesKey, keys } from '@/lib/swr/keys';
 import { useStudy } from '@/lib/swr/use-study';
 import { MAX_PDF_MB, uploadErrorMessage, uploadPdf } from './pdf-upload';
+import { NoticeBanner } from './NoticeBadge';
 import { SafeHtml } from './SafeHtml';
 import { StudyMetaForm } from './StudyMetaForm';
 
@@ -171,6 +172,7 @@ export function StudyDetail({
         </p>
         <p className="text-accent-text text-sm font-semibold">{study.citation}</p>
         <h1 className="text-2xl font-semibold sm:text-3xl">{study.title}</h1>
+        <NoticeBanner notice={study.notice} />
         <p className="text-ink-muted">
           {[study.journal, study.year].filter(Boolean).join(', ')}
           {study.doi && (

@@ -11,6 +11,7 @@ import { DESIGN_LABEL, percent, TRAINING_STATUS_LABEL } from '@/components/revie
 import { LocalTime } from '@/components/review/LocalTime';
 import { STUDY_DESIGNS } from '@/lib/reviews/types';
 import { useStudies } from '@/lib/swr/use-studies';
+import { NoticeBadge } from './NoticeBadge';
 
 type SortField = 'citation' | 'year' | 'design' | 'added';
 const COLUMNS: { key: SortField | null; label: string; className?: string }[] = [
@@ -190,6 +191,7 @@ export function StudyTable({
                     {s.citation}
                   </Link>
                   <p className="text-ink">{s.title}</p>
+                  <NoticeBadge notice={s.notice} />
                   <p className="text-ink-muted text-xs">
                     {[
                       s.design ? DESIGN_LABEL[s.design] : 'design not recorded',
@@ -249,6 +251,11 @@ export function StudyTable({
                         {s.citation}
                       </Link>
                       <span className="text-ink mt-0.5 block">{s.title}</span>
+                      {s.notice && (
+                        <span className="mt-1 block">
+                          <NoticeBadge notice={s.notice} />
+                        </span>
+                      )}
                       {s.journal && <span className="text-ink-muted block text-xs italic">{s.journal}</span>}
                       {s.tags.length > 0 && (
                         <span className="mt-1 flex flex-wrap gap-1">

@@ -3,10 +3,12 @@ import { SafetyNotice } from '@/components/ui/SafetyNotice';
 import type { VerdictPageDTO } from '@/lib/publishing/types';
 import { AudienceAdvice } from './AudienceAdvice';
 import { VerdictChip } from '@/components/verdict/VerdictChip';
+import { EvidenceChangedNotice } from './EvidenceChangedNotice';
 import { longDate } from './labels';
 import { MechanismRanking } from './MechanismRanking';
 import { ProtocolPlain } from './ProtocolPlain';
 import { ReferenceList } from './ReferenceList';
+import { VerdictFirmness } from './VerdictFirmness';
 
 /** Section headings share one look; each section is labelled by its heading for landmark navigation. */
 function Section({ id, title, children }: { id: string; title: string; children: React.ReactNode }) {
@@ -36,6 +38,7 @@ export function VerdictArticle({ page, latest }: { page: VerdictPageDTO; latest:
           <p className="mt-1 text-sm">It stays readable so you can see what was said; do not act on it.</p>
         </div>
       )}
+      {latest && <EvidenceChangedNotice notices={page.evidenceChanged ?? []} />}
       {!latest && (
         <div role="note" className="border-warning-100 bg-warning-50 text-warning-800 rounded-lg border px-4 py-3">
           You are reading version {page.version.number}, an earlier version.{' '}
@@ -74,6 +77,12 @@ export function VerdictArticle({ page, latest }: { page: VerdictPageDTO; latest:
       </header>
 
       <SafetyNotice />
+
+      {s.robustness && (
+        <Section id="firmness" title="How firm is this verdict?">
+          <VerdictFirmness robustness={s.robustness} />
+        </Section>
+      )}
 
       <Section id="protocol" title="The protocol, in everyday words">
         <ProtocolPlain everyday={s.everyday} />

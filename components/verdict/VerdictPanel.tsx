@@ -12,6 +12,7 @@ import { useVerdict } from '@/lib/swr/use-verdict';
 import { EffectConflictWarning } from './EffectConflictWarning';
 import { LikelihoodScale } from './LikelihoodScale';
 import { VerdictChip } from './VerdictChip';
+import { RobustnessPanel } from './RobustnessPanel';
 
 /** What each verdict means, in a sentence a coach can repeat to an athlete. */
 const VERDICT_MEANING: Record<VerdictKey, string> = {
@@ -144,6 +145,8 @@ export function VerdictPanel({ reviewId, mechanisms }: { reviewId: number; mecha
               </ol>
             )}
           </div>
+
+          {data.robustness && <RobustnessPanel verdict={data} />}
 
           <details className="group border-line bg-paper-sunken/60 rounded-md border" data-testid="verdict-working">
             <summary className="text-brand cursor-pointer list-none px-3 py-2.5 text-sm font-semibold marker:hidden">

@@ -4,6 +4,7 @@ import * as peerReview from './20261201-0003-peer-review';
 import * as publishing from './20261201-0004-publishing';
 import * as directionAndChecks from './20261202-01-direction-and-checks';
 import * as hardening from './20261202-02-hardening';
+import * as evidenceWatch from './20261202-05-evidence-watch';
 
 /**
  * Every migration in the order it runs. Listed by hand (not globbed) so the same list works
@@ -17,4 +18,5 @@ export const migrations = [
   { name: '20261201-0004-publishing', ...publishing },
   { name: '20261202-01-direction-and-checks', ...directionAndChecks },
   { name: '20261202-02-hardening', ...hardening },
+  { name: '20261202-05-evidence-watch', ...evidenceWatch },
 ];

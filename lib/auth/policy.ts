@@ -73,6 +73,15 @@ export const POLICY = {
   'study.write': roles('owner', 'coach'),
   'verdict.read': roles(...ANY),
   'search.read': roles(...STAFF),
+  // The evidence watch (lib/watch): owners and coaches run it on demand; staff read its results
+  // (athletes see its notice on the verdict page only); a verdict's author or the owner dismisses
+  // a "new evidence to consider" offer.
+  'evidence.watch.run': roles('owner', 'coach'),
+  'evidence.watch.read': roles(...STAFF),
+  // A flag's dry run is the engine's verdict of the review as it is now: not for reviewers, who
+  // may be scoring a new round of it blind.
+  'evidence.dryrun.read': roles('owner', 'coach'),
+  'evidence.suggestion.dismiss': authorOrOwner,
 } satisfies Record<string, Rule>;
 
 export type Action = keyof typeof POLICY;

@@ -24,5 +24,6 @@ export function toStudyDTO(study: Study, appraisalCount = 0): StudyDTO {
     hasPdf: study.pdfKey !== null,
     createdAt: study.createdAt.toISOString(),
     appraisalCount,
+    notice: study.evidenceNotice ?? null,
   };
 }

@@ -3,6 +3,7 @@ import { decide, type Actor } from '@/lib/auth/policy';
 import { AppError, notFound } from '@/lib/api/errors';
 import { verdictDoc, verdictIndex, searchVerdictIndex, type VerdictDoc } from '@/lib/search/verdict-index';
 import { Publication, PublishedVersion, Team, User } from '@/models';
+import { flagsOfVersion } from '@/lib/watch/flags';
 import type { VerdictListItemDTO, VerdictPageDTO, Visibility, VersionSnapshot, VersionSummaryDTO } from './types';
 
 /**
@@ -45,6 +46,7 @@ async function loadPublication(slug: string): Promise<LoadedPublication | null> 
     publication: publication.get({ plain: true }),
     versions: versions.map((v) => v.get({ plain: true })),
     publisherNames: new Map(users.map((u) => [u.id, u.name])),
+    evidenceChanged: await flagsOfVersion(publication.id, publication.latestNumber),
   };
 }
 
@@ -74,6 +76,7 @@ export async function verdictPage(slug: string, actor: Actor | null, version?: n
     latestNumber: p.latestNumber,
     versions: versions.map((v) => summary(v, publisherNames)).reverse(),
     snapshot: shown.snapshot as unknown as VersionSnapshot,
+    evidenceChanged: shown.number === p.latestNumber ? (loaded.evidenceChanged ?? []) : [],
   };
 }
 

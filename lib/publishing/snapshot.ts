@@ -7,6 +7,7 @@ import { bodyReferences } from '@/lib/validation/reviews';
 import { Study, Team, User } from '@/models';
 import { everydayProtocol, verdictSummary } from './plain';
 import { bodyPlainText, renderBodyHtml } from './render-body';
+import { robustnessPlain } from './robustness-plain';
 import { sanitizeHtml } from './sanitize';
 import type { SnapshotMechanism, SnapshotReference, VersionSnapshot } from './types';
 
@@ -105,5 +106,6 @@ export async function buildSnapshot(reviewId: number): Promise<VersionSnapshot |
     team: { id: team?.id ?? review.teamId, name: team?.name ?? 'Team', slug: team?.slug ?? '' },
     authors: [author?.name ?? 'Former member'],
     effort: protocol.effort,
+    robustness: robustnessPlain(verdict.robustness, verdict.verdict),
   };
 }

@@ -6,6 +6,7 @@ import type {
   RecommendationsDTO,
   VerdictKey,
 } from '@/lib/reviews/types';
+import type { NoticeKind } from '@/lib/watch/notices';
 
 /**
  * What a published version holds (stored as JSON, never changed) and what the pages and routes
@@ -49,6 +50,16 @@ export interface EverydayProtocol {
   loadTableNote: string | null;
 }
 
+/** What the verdict rests on and what would change it, in words for athletes (docs/scoring.md §9). */
+export interface SnapshotRobustness {
+  /** "This verdict rests on …" */
+  restsOn: string;
+  /** "It would change if …" */
+  wouldChange: string;
+  fragility: 1 | 2 | null;
+  pivotal: { studyId: number; citation: string }[];
+}
+
 export interface VersionSnapshot {
   schema: 1;
   title: string;
@@ -75,6 +86,8 @@ export interface VersionSnapshot {
   team: { id: number; name: string; slug: string };
   authors: string[];
   effort: Effort | null;
+  /** Absent from versions published before verdicts said how firm they are. */
+  robustness?: SnapshotRobustness;
 }
 
 export interface VersionSummaryDTO {
@@ -119,6 +132,18 @@ export interface VerdictPageDTO {
   latestNumber: number;
   versions: VersionSummaryDTO[];
   snapshot: VersionSnapshot;
+  /**
+   * Studies this version cites that received a notice since it was published (lib/watch): the
+   * page says so above the verdict. Empty (or absent) on earlier versions and once a new version is out.
+   */
+  evidenceChanged?: EvidenceChangedDTO[];
+}
+
+export interface EvidenceChangedDTO {
+  citation: string;
+  kind: NoticeKind;
+  noticeDoi: string;
+  date: string | null;
 }
 
 export interface PublishResultDTO {

@@ -1,3 +1,5 @@
+import type { EvidenceNotice } from '@/lib/watch/notices';
+
 /**
  * The shapes the workbench's routes send and its pages read. Written first so the server side
  * (lib/reviews, lib/library, app/api) and the client side (components, pages) agree. Fractions
@@ -136,6 +138,8 @@ export interface StudyDTO {
   createdAt: string;
   /** How many appraisals (in any review of the team) use this study. */
   appraisalCount: number;
+  /** The most serious update notice the evidence watch found (retraction, correction …), or null. */
+  notice: EvidenceNotice | null;
 }
 
 export interface AppraisalDTO {
@@ -287,6 +291,56 @@ export interface VerdictDTO {
   appraisals: AppraisalWorkingDTO[];
   /** The claimed outcome's pooled effect against its probability (GET /verdict only). */
   effectCheck?: EffectCheckDTO | null;
+  /** What the verdict hangs on (docs/scoring.md §9); blind like every engine number. */
+  robustness: RobustnessDTO;
+}
+
+/** The verdict without one study (docs/scoring.md §9, leave-one-out). */
+export interface LeaveOneOutDTO {
+  studyId: number;
+  /** Author–year. */
+  citation: string;
+  verdict: VerdictKey;
+  /** P_outcome without that study. */
+  outcomeProbability: number;
+  changed: boolean;
+}
+
+/** Priors 0.01…0.99 over which the verdict key (outcome) or the likelihood term (mechanism) stays the same. */
+export interface PriorRangeDTO {
+  /** The prior the review uses now. */
+  prior: number;
+  low: number;
+  high: number;
+}
+
+/** An appraisal whose certainty, one level lower or higher, changes the verdict. */
+export interface DecidingCertaintyDTO {
+  appraisalId: number;
+  studyId: number;
+  citation: string;
+  /** null = the claimed outcome. */
+  mechanismId: number | null;
+  certainty: CertaintyLevel;
+  /** The verdict one level lower / higher (equal to the verdict when that way changes nothing). */
+  down: VerdictKey;
+  up: VerdictKey;
+}
+
+/** GET /api/reviews/:id/verdict → robustness: lib/scoring's robustness() with rows' ids and citations. */
+export interface RobustnessDTO {
+  /** Smallest number of studies (up to 2) whose removal together changes the verdict; null: none. */
+  fragility: 1 | 2 | null;
+  /** The first such set of study ids. */
+  fragileSet: number[] | null;
+  /** One row per appraised study, in study order (the outcome's appraisals first). */
+  leaveOneOut: LeaveOneOutDTO[];
+  /** Study ids whose removal alone changes the verdict. */
+  pivotal: number[];
+  outcomePrior: PriorRangeDTO;
+  /** In the review's mechanism order. */
+  mechanismPriors: (PriorRangeDTO & { mechanismId: number })[];
+  decidingCertainty: DecidingCertaintyDTO[];
 }
 
 /** The two families of effect size the meta-analysis pools, never together (lib/reviews/meta.ts). */

@@ -5,6 +5,7 @@ import { sessionSpacingOk, weeklyTimeUnderLoad } from '@/lib/training/dose';
 import { outcomeEffectCheck } from './effect-check';
 import { deriveAppraisal, type DerivedAppraisal, type StudyFacts } from './derive';
 import { convertLoad } from './protocol';
+import { robustnessFromScored } from './robustness';
 import { appraisalFacts, targetFacts, toProtocolDTO } from './rows';
 import type {
   AppraisalWorkingDTO,
@@ -59,6 +60,8 @@ export interface AppraisalRowFacts {
 }
 export interface StudyRowFacts {
   id: number;
+  /** Author–year; the seed's in-memory rows may lack it. */
+  citation?: string;
   design: string | null;
   population: string | null;
   injured: boolean;
@@ -76,7 +79,7 @@ export interface ReviewData<
   appraisals: A[];
   studies: Map<number, S>;
 }
-type AnyReviewData = ReviewData<ReviewFacts, MechanismFacts, AppraisalRowFacts, StudyRowFacts>;
+export type AnyReviewData = ReviewData<ReviewFacts, MechanismFacts, AppraisalRowFacts, StudyRowFacts>;
 
 export async function loadReviewData(reviewId: number, transaction?: Transaction): Promise<ReviewData | null> {
   const review = await Review.findByPk(reviewId, { transaction });
@@ -139,6 +142,8 @@ export interface ScoredReview {
   score: ReviewScore;
   derived: Map<number, DerivedAppraisal>;
   ids: Map<number, string>;
+  /** Appraisal ids in the engine's reading order: the outcome's, then each mechanism's in order. */
+  appraisalOrder: number[];
 }
 
 /** Pure: plain rows in, the engine's score out. */
@@ -146,19 +151,29 @@ export function scoreReviewData(data: AnyReviewData): ScoredReview {
   const derived = deriveAll(data);
   const protocol = toProtocolDTO(data.review.protocol);
   const ids = engineIds(data.mechanisms);
+  const appraisalOrder: number[] = [];
   const evidenceOf = (mechanismId: number | null) =>
     data.appraisals
       .filter((a) => a.mechanismId === mechanismId && derived.has(a.id))
       .map((a) => {
+        appraisalOrder.push(a.id);
         const d = derived.get(a.id)!;
-        return { direction: appraisalFacts(a).direction, certainty: d.certainty.level, applicability: d.applicability };
+        // The study id lets robustness (docs/scoring.md §9) leave a whole study out at once.
+        return {
+          direction: appraisalFacts(a).direction,
+          certainty: d.certainty.level,
+          applicability: d.applicability,
+          studyId: String(a.studyId),
+        };
       });
+  // The outcome's list first, then each mechanism's, as the engine reads them (appraisalOrder).
+  const outcomeEvidence = evidenceOf(null);
   const input: ReviewInput = {
     protocol: {
       intensity: protocol.intensity ?? undefined,
       effort: protocol.effort ?? undefined,
     },
-    outcome: { evidence: evidenceOf(null) },
+    outcome: { evidence: outcomeEvidence },
     mechanisms: data.mechanisms.map((m) => ({
       id: ids.get(m.id)!,
       stated: m.stated,
@@ -169,7 +184,7 @@ export function scoreReviewData(data: AnyReviewData): ScoredReview {
       magnitude: m.magnitude as Magnitude,
     })),
   };
-  return { input, score: scoreReview(input), derived, ids };
+  return { input, score: scoreReview(input), derived, ids, appraisalOrder };
 }
 
 /** The protocol's dose against every mechanism's minimum (SCORING.md §3 and §8). */
@@ -212,7 +227,8 @@ export function doseCheck(data: AnyReviewData): DoseCheckDTO {
 
 /** GET /api/reviews/:id/verdict: the engine's full output with rows' ids, the dose check and each appraisal's working. */
 export function verdictFromData(data: AnyReviewData): VerdictDTO {
-  const { score, derived, ids } = scoreReviewData(data);
+  const scored = scoreReviewData(data);
+  const { score, derived, ids } = scored;
   const byEngineId = new Map([...ids].map(([rowId, engineId]) => [engineId, rowId]));
   const names = new Map(data.mechanisms.map((m) => [m.id, m.name]));
   const appraisals: AppraisalWorkingDTO[] = data.appraisals
@@ -247,6 +263,7 @@ export function verdictFromData(data: AnyReviewData): VerdictDTO {
     steps: score.steps,
     dose: doseCheck(data),
     appraisals,
+    robustness: robustnessFromScored(data, scored),
   };
 }
 

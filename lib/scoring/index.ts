@@ -21,6 +21,7 @@ export {
   type MechanismInput,
   type MechanismScore,
 } from './mechanism';
+export * from './robustness';
 export * from './types';
 export * from './verdict';
 export * from './direction';

@@ -174,6 +174,82 @@ const plural = (n: number, word: string): string => `${n} ${word}${n === 1 ? '' 
 const plusMinus = (x: number): string => (x < 0 ? `− ${formatNumber(-x)}` : `+ ${formatNumber(x)}`);
 
 /**
+ * The prior as the model uses it: the default when none is given, else the given value clamped
+ * to [0.01, 0.99] (docs/scoring.md §3 and precise rules), with its log-odds.
+ *
+ * @internal Shared by {@link tallyEvidence} and robustness.ts (which moves the prior).
+ * @example
+ * readPrior('outcome', 0.995); // { prior: 0.99, priorLogOdds: 4.5951, given: 0.995 }
+ */
+export function readPrior(
+  field: string,
+  priorInput: unknown,
+): { prior: number; priorLogOdds: number; given: number | undefined } {
+  let prior = DEFAULT_PRIOR;
+  let given: number | undefined;
+  if (priorInput !== undefined) {
+    given = requireFinite(`${field}.prior`, priorInput, { min: 0, max: 1, minExclusive: true, maxExclusive: true });
+    prior = Math.min(PRIOR_CLAMP.max, Math.max(PRIOR_CLAMP.min, given));
+  }
+  return { prior, priorLogOdds: Math.log(prior / (1 - prior)), given };
+}
+
+/**
+ * Number of direction × certainty slots an evidence list is tallied into.
+ *
+ * @internal
+ * @example
+ * new Float64Array(TALLY_SLOTS); // one sum of applicability per slot
+ */
+export const TALLY_SLOTS = 12;
+
+/**
+ * The slot of an already validated appraisal: direction index × 4 + certainty index.
+ *
+ * @internal Used by robustness.ts, which tallies the same lists with studies left out.
+ * @example
+ * tallySlot({ direction: 'against', certainty: 'low', applicability: 1 }); // 6
+ */
+export function tallySlot(appraisal: Appraisal): number {
+  return directionIndex(appraisal.direction) * 4 + certaintyIndex(appraisal.certainty);
+}
+
+/**
+ * Σ s·w(c)·a·ln 4 and Σ w(c)·a from per-slot counts and applicability sums, slot by slot in a
+ * fixed order, so any caller that tallies the same appraisals gets bit-for-bit the same numbers
+ * (robustness.ts relies on this to agree with {@link scoreReview} exactly).
+ *
+ * @internal Shared by {@link tallyEvidence} and robustness.ts.
+ * @example
+ * const counts = new Uint32Array(TALLY_SLOTS); const sums = new Float64Array(TALLY_SLOTS);
+ * counts[0] = 1; sums[0] = 1; // one supporting, high-certainty, fully applicable appraisal
+ * sumTally(counts, sums); // { evidenceLogOdds: 1.3863, evidenceWeight: 1 }
+ */
+export function sumTally(
+  counts: ArrayLike<number>,
+  sums: ArrayLike<number>,
+  onSlot?: (direction: number, certainty: number, count: number, applicabilitySum: number, term: number) => void,
+): { evidenceLogOdds: number; evidenceWeight: number } {
+  let evidenceLogOdds = 0;
+  let evidenceWeight = 0;
+  for (let d = 0; d < 3; d += 1) {
+    for (let c = 0; c < 4; c += 1) {
+      const slot = d * 4 + c;
+      const n = counts[slot];
+      if (n === 0) continue;
+      const weight = CERTAINTY_WEIGHT[CERTAINTIES[c]];
+      const sumA = sums[slot];
+      evidenceWeight += weight * sumA;
+      const sign = DIRECTION_SIGN[DIRECTIONS[d]];
+      const term = sign === 0 ? 0 : sign * weight * sumA * LN_LR;
+      if (sign !== 0) evidenceLogOdds += term;
+      onSlot?.(d, c, n, sumA, term);
+    }
+  }
+  return { evidenceLogOdds, evidenceWeight };
+}
+
+/**
  * Prior and evidence part of the log-odds, grouped by direction × certainty so that a review of
  * thousands of appraisals still reads as at most nine lines, each redoable by hand from the
  * appraisal list (count, sum of applicability, weight, ln 4).
@@ -183,23 +259,14 @@ const plusMinus = (x: number): string => (x < 0 ? `− ${formatNumber(-x)}` : `+
  * tallyEvidence('outcome', undefined, []).priorLogOdds; // 0
  */
 export function tallyEvidence(field: string, priorInput: unknown, evidenceInput: unknown): EvidenceTally {
-  let prior = DEFAULT_PRIOR;
-  let priorText = `Prior plausibility ${formatNumber(DEFAULT_PRIOR)} (none given, the default)`;
-  if (priorInput !== undefined) {
-    const given = requireFinite(`${field}.prior`, priorInput, {
-      min: 0,
-      max: 1,
-      minExclusive: true,
-      maxExclusive: true,
-    });
-    prior = Math.min(PRIOR_CLAMP.max, Math.max(PRIOR_CLAMP.min, given));
-    priorText =
-      prior === given
+  const { prior, priorLogOdds, given } = readPrior(field, priorInput);
+  const priorText =
+    given === undefined
+      ? `Prior plausibility ${formatNumber(DEFAULT_PRIOR)} (none given, the default)`
+      : prior === given
         ? `Prior plausibility ${formatNumber(prior)}`
         : `Prior plausibility ${formatNumber(given)}, held at ${formatNumber(prior)} (priors stay within ` +
           `${formatNumber(PRIOR_CLAMP.min)}…${formatNumber(PRIOR_CLAMP.max)} so evidence can always move them)`;
-  }
-  const priorLogOdds = Math.log(prior / (1 - prior));
   const steps: WorkingStep[] = [
     {
       kind: 'prior',
@@ -209,8 +276,8 @@ export function tallyEvidence(field: string, priorInput: unknown, evidenceInput:
   ];
 
   const evidence = requireArray<unknown>(`${field}.evidence`, evidenceInput);
-  const counts = new Uint32Array(12);
-  const sums = new Float64Array(12);
+  const counts = new Uint32Array(TALLY_SLOTS);
+  const sums = new Float64Array(TALLY_SLOTS);
   for (let i = 0; i < evidence.length; i += 1) {
     const item = evidence[i] as Partial<Record<keyof Appraisal, unknown>> | null;
     if (typeof item !== 'object' || item === null) {
@@ -233,38 +300,27 @@ export function tallyEvidence(field: string, priorInput: unknown, evidenceInput:
     sums[slot] += applicability as number;
   }
 
-  let evidenceLogOdds = 0;
-  let evidenceWeight = 0;
   let neutralCount = 0;
   let neutralWeight = 0;
-  for (let d = 0; d < 3; d += 1) {
-    for (let c = 0; c < 4; c += 1) {
-      const slot = d * 4 + c;
-      const n = counts[slot];
-      if (n === 0) continue;
-      const direction = DIRECTIONS[d];
-      const certainty = CERTAINTIES[c];
-      const weight = CERTAINTY_WEIGHT[certainty];
-      const sumA = sums[slot];
-      evidenceWeight += weight * sumA;
-      if (direction === 'neutral') {
-        neutralCount += n;
-        neutralWeight += weight * sumA;
-        continue;
-      }
-      const sign = DIRECTION_SIGN[direction];
-      const term = sign * weight * sumA * LN_LR;
-      evidenceLogOdds += term;
-      steps.push({
-        kind: 'evidence',
-        text:
-          `${plural(n, `${DIRECTION_ADJECTIVE[direction]} appraisal`)} of ${CERTAINTY_WORDS[certainty]} certainty: ` +
-          `${formatSigned(sign, 0)} × weight ${formatNumber(weight)} × applicability ${formatNumber(sumA)}` +
-          `${n > 1 ? ' (summed)' : ''} × ln ${LIKELIHOOD_RATIO_PER_APPRAISAL} (${formatNumber(LN_LR)}) = ${formatSigned(term)}.`,
-        values: { count: n, sign, weight, applicabilitySum: sumA, term },
-      });
+  const { evidenceLogOdds, evidenceWeight } = sumTally(counts, sums, (d, c, n, sumA, term) => {
+    const direction = DIRECTIONS[d];
+    const certainty = CERTAINTIES[c];
+    const weight = CERTAINTY_WEIGHT[certainty];
+    if (direction === 'neutral') {
+      neutralCount += n;
+      neutralWeight += weight * sumA;
+      return;
     }
-  }
+    const sign = DIRECTION_SIGN[direction];
+    steps.push({
+      kind: 'evidence',
+      text:
+        `${plural(n, `${DIRECTION_ADJECTIVE[direction]} appraisal`)} of ${CERTAINTY_WORDS[certainty]} certainty: ` +
+        `${formatSigned(sign, 0)} × weight ${formatNumber(weight)} × applicability ${formatNumber(sumA)}` +
+        `${n > 1 ? ' (summed)' : ''} × ln ${LIKELIHOOD_RATIO_PER_APPRAISAL} (${formatNumber(LN_LR)}) = ${formatSigned(term)}.`,
+      values: { count: n, sign, weight, applicabilitySum: sumA, term },
+    });
+  });
   if (neutralCount > 0) {
     steps.push({
       kind: 'evidence',
@@ -285,6 +341,29 @@ export function tallyEvidence(field: string, priorInput: unknown, evidenceInput:
 }
 
 /**
+ * The probability after a change of log-odds from the prior, the number
+ * {@link finishProbability} reports.
+ *
+ * @internal Shared by {@link finishProbability} and robustness.ts.
+ * @example
+ * moveFromPrior(0.5, 0, Math.log(4)).probability; // 0.8
+ */
+export function moveFromPrior(
+  prior: number,
+  priorLogOdds: number,
+  change: number,
+): { probability: number; logOdds: number; guarded: boolean } {
+  const logOdds = priorLogOdds + change;
+  const unguarded = logOdds >= 0 ? 1 / (1 + Math.exp(-logOdds)) : Math.exp(logOdds) / (1 + Math.exp(logOdds));
+  const fromLogOdds = logistic(logOdds);
+  // ln and exp do not round-trip exactly, so measure the move from the prior itself: nothing
+  // added leaves the prior as given (a prior on a band edge such as 0.66 stays on it), and a net
+  // push up (down) can never land a rounding error below (above) where it started.
+  const probability = change === 0 ? prior : change > 0 ? Math.max(prior, fromLogOdds) : Math.min(prior, fromLogOdds);
+  return { probability, logOdds, guarded: fromLogOdds !== unguarded };
+}
+
+/**
  * Turns prior log-odds, evidence and penalty into the probability and its closing step.
  *
  * @internal Shared with verdict.ts.
@@ -298,15 +377,7 @@ export function finishProbability(
   dosePenalty: number,
   steps: WorkingStep[],
 ): { probability: number; term: LikelihoodTerm; logOdds: number } {
-  const change = evidenceLogOdds - dosePenalty;
-  const logOdds = priorLogOdds + change;
-  const unguarded = logOdds >= 0 ? 1 / (1 + Math.exp(-logOdds)) : Math.exp(logOdds) / (1 + Math.exp(logOdds));
-  const fromLogOdds = logistic(logOdds);
-  // ln and exp do not round-trip exactly, so measure the move from the prior itself: nothing
-  // added leaves the prior as given (a prior on a band edge such as 0.66 stays on it), and a net
-  // push up (down) can never land a rounding error below (above) where it started.
-  const probability = change === 0 ? prior : change > 0 ? Math.max(prior, fromLogOdds) : Math.min(prior, fromLogOdds);
-  const guarded = fromLogOdds !== unguarded;
+  const { probability, logOdds, guarded } = moveFromPrior(prior, priorLogOdds, evidenceLogOdds - dosePenalty);
   const term = likelihoodTerm(probability);
   steps.push({
     kind: 'probability',

@@ -94,6 +94,11 @@ export interface Appraisal {
   certainty: CertaintyLevel;
   /** 0…1 */
   applicability: number;
+  /**
+   * The study the appraisal reads, so that robustness (docs/scoring.md §9) can leave a whole study
+   * out of the outcome and every mechanism at once. Without one the appraisal is its own study.
+   */
+  studyId?: string;
 }
 
 /**

@@ -81,6 +81,21 @@ export interface ReviewScore {
 }
 
 /**
+ * The first row of the verdict table (docs/scoring.md §5) that holds, from the three numbers it
+ * reads: the evidence weight W, P_outcome, and whether some stated mechanism reaches 0.66.
+ *
+ * @example
+ * verdictKey(2.9, 0.8584, true); // 'supported'
+ * verdictKey(0.9, 0.8584, true); // 'insufficient'
+ */
+export function verdictKey(evidenceWeight: number, outcomeProbability: number, statedHolds: boolean): VerdictKey {
+  if (evidenceWeight < MIN_EVIDENCE_WEIGHT) return 'insufficient';
+  if (outcomeProbability < VERDICT_THRESHOLDS.notSupportedBelow) return 'not-supported';
+  if (outcomeProbability < VERDICT_THRESHOLDS.uncertainBelow) return 'uncertain';
+  return statedHolds ? 'supported' : 'other-reasons';
+}
+
+/**
  * Scores a review end to end (SCORING.md §3–§5): the claimed outcome from its direct appraisals
  * (no dose penalty), every mechanism under the review's protocol, the evidence weight W over all
  * appraisals, the verdict by the first row of §5's table that holds, and the mechanisms ranked by
@@ -185,30 +200,25 @@ export function scoreReview(input: ReviewInput): ReviewScore {
   const stated = scored.filter((m) => m.stated);
   const holding = stated.filter((m) => m.score.probability >= VERDICT_THRESHOLDS.holds);
   const p = outcome.probability;
-  let verdict: VerdictKey;
+  const verdict = verdictKey(evidenceWeight, p, holding.length > 0);
   let why: string;
-  if (evidenceWeight < MIN_EVIDENCE_WEIGHT) {
-    verdict = 'insufficient';
+  if (verdict === 'insufficient') {
     why = `W = ${formatNumber(evidenceWeight)} is below ${formatNumber(MIN_EVIDENCE_WEIGHT)}`;
-  } else if (p < VERDICT_THRESHOLDS.notSupportedBelow) {
-    verdict = 'not-supported';
+  } else if (verdict === 'not-supported') {
     why =
       `W = ${formatNumber(evidenceWeight)} ≥ ${formatNumber(MIN_EVIDENCE_WEIGHT)}; ` +
       `P_outcome = ${formatNumber(p)} is below ${formatNumber(VERDICT_THRESHOLDS.notSupportedBelow)}`;
-  } else if (p < VERDICT_THRESHOLDS.uncertainBelow) {
-    verdict = 'uncertain';
+  } else if (verdict === 'uncertain') {
     why =
       `W = ${formatNumber(evidenceWeight)} ≥ ${formatNumber(MIN_EVIDENCE_WEIGHT)}; P_outcome = ${formatNumber(p)} ` +
       `is at least ${formatNumber(VERDICT_THRESHOLDS.notSupportedBelow)} but below ${formatNumber(VERDICT_THRESHOLDS.uncertainBelow)}`;
-  } else if (holding.length > 0) {
-    verdict = 'supported';
+  } else if (verdict === 'supported') {
     why =
       `W = ${formatNumber(evidenceWeight)} ≥ ${formatNumber(MIN_EVIDENCE_WEIGHT)}; P_outcome = ${formatNumber(p)} ≥ ` +
       `${formatNumber(VERDICT_THRESHOLDS.uncertainBelow)}; the stated mechanism ` +
       holding.map((m) => `"${m.id}" has p = ${formatNumber(m.score.probability)}`).join(', ') +
       ` ≥ ${formatNumber(VERDICT_THRESHOLDS.holds)}`;
   } else {
-    verdict = 'other-reasons';
     why =
       `W = ${formatNumber(evidenceWeight)} ≥ ${formatNumber(MIN_EVIDENCE_WEIGHT)}; P_outcome = ${formatNumber(p)} ≥ ` +
       `${formatNumber(VERDICT_THRESHOLDS.uncertainBelow)}; ` +

@@ -5,17 +5,21 @@ import { tmpdir } from 'node:os';
 import path from 'node:path';
 import type { TestProject } from 'vitest/node';
 import { startFakeSmtp, type FakeSmtp } from '../../lib/mail/fake-smtp';
+import { startFakeCrossrefServer, type FakeCrossrefServer } from '../../lib/citations/fake-crossref-server';
 
 declare module 'vitest' {
   export interface ProvidedContext {
     baseURL: string;
     mailDir: string;
     databaseFile: string;
+    /** The registry fake of the evidence watch (POST <url>/__control to change what it answers). */
+    crossrefURL: string;
   }
 }
 
 let server: ChildProcess | undefined;
 let smtp: FakeSmtp | undefined;
+let crossref: FakeCrossrefServer | undefined;
 
 function freePort(): Promise<number> {
   return new Promise((resolve, reject) => {
@@ -62,6 +66,7 @@ export default async function setup(project: TestProject) {
   await db().close();
 
   smtp = await startFakeSmtp({ dropDir: mailDir });
+  crossref = await startFakeCrossrefServer();
 
   const env = { ...process.env, NODE_ENV: 'production' as const, NEXT_TELEMETRY_DISABLED: '1' };
   if (!(process.env.E2E_REUSE_BUILD === '1' && existsSync(path.join(root, '.next', 'BUILD_ID')))) {
@@ -93,6 +98,7 @@ export default async function setup(project: TestProject) {
       STORAGE_DIR: path.join(work, 'uploads'),
       // The browser contexts each send their own x-forwarded-for (a proxy's word, trusted from loopback).
       TRUSTED_PROXIES: '127.0.0.1,::1',
+      CROSSREF_BASE_URL: crossref.url,
     },
     stdio: ['ignore', 'inherit', 'inherit'],
   });
@@ -101,10 +107,12 @@ export default async function setup(project: TestProject) {
   project.provide('baseURL', baseURL);
   project.provide('mailDir', mailDir);
   project.provide('databaseFile', databaseFile);
+  project.provide('crossrefURL', crossref.url);
 
   return async () => {
     // Stopped by its own PID: the server, not a wrapper around it.
     server?.kill('SIGTERM');
     await smtp?.close();
+    await crossref?.close();
   };
 }

@@ -1,5 +1,6 @@
 import type { Metadata } from 'next';
 import { LatestVerdicts } from '@/components/dashboard/LatestVerdicts';
+import { NewEvidence } from '@/components/dashboard/NewEvidence';
 import { PendingScorecards } from '@/components/dashboard/PendingScorecards';
 import { listVerdicts } from '@/lib/publishing/queries';
 import { TeamList } from '@/components/dashboard/TeamList';
@@ -12,15 +13,17 @@ import { listReviews } from '@/lib/reviews/queries';
 import { withBlindVerdictsHidden } from '@/lib/rounds/freeze';
 import { pendingScorecards } from '@/lib/rounds/queries';
 import { teamsOf } from '@/lib/teams/teams';
+import { suggestionsFor } from '@/lib/watch/suggestions';
 
 export const metadata: Metadata = { title: 'Dashboard' };
 
 export default async function DashboardPage() {
   const actor = await requirePageActor('/dashboard');
-  const [user, teams, scorecards] = await Promise.all([
+  const [user, teams, scorecards, suggestions] = await Promise.all([
     findUser(actor.userId),
     teamsOf(actor.userId),
     pendingScorecards(actor.userId),
+    suggestionsFor(actor),
   ]);
   const firstName = user?.name.split(/\s+/)[0];
   // The reviews of the first team where the person works on reviews (athletes read verdicts instead).
@@ -36,6 +39,7 @@ export default async function DashboardPage() {
         description="Your teams and your role in each. Claims, reviews and verdicts live inside a team."
       />
       <PendingScorecards items={scorecards} />
+      <NewEvidence items={suggestions} />
       <section aria-labelledby="teams-heading" className="space-y-4">
         <h2 id="teams-heading" className="text-xl font-semibold">
           Your teams

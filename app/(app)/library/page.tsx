@@ -5,6 +5,7 @@ import { StudyTable } from '@/components/library/StudyTable';
 import { TeamTabs } from '@/components/review/TeamTabs';
 import { pickTeam } from '@/components/review/viewer';
 import { EmptyState } from '@/components/ui/EmptyState';
+import { EvidenceWatchPanel } from '@/components/watch/EvidenceWatchPanel';
 import { requirePageActor } from '@/lib/auth/current';
 import { decide } from '@/lib/auth/policy';
 import { teamsOf } from '@/lib/teams/teams';
@@ -47,6 +48,10 @@ export default async function LibraryPage({ searchParams }: { searchParams: Prom
       <TeamTabs teams={teams} currentId={team.id} basePath="/library" />
       <div className="space-y-8">
         {canWrite && <AddStudies teamId={team.id} />}
+        <EvidenceWatchPanel
+          teamId={team.id}
+          canRun={decide(actor, 'evidence.watch.run', { teamId: team.id }) === 'allow'}
+        />
         <StudyTable key={team.id} teamId={team.id} initial={initial} />
       </div>
     </>

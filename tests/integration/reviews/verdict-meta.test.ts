@@ -92,6 +92,7 @@ describe('GET /api/reviews/:id/verdict', () => {
       'label',
       'mechanisms',
       'outcome',
+      'robustness',
       'steps',
       'verdict',
     ]);

@@ -49,6 +49,10 @@ const EXPECTED: Record<Action, Row> = {
   'study.write': { owner: A, coach: A, reviewer: F, athlete: F },
   'verdict.read': { owner: A, coach: A, reviewer: A, athlete: A },
   'search.read': { owner: A, coach: A, reviewer: A, athlete: F },
+  'evidence.watch.run': { owner: A, coach: A, reviewer: F, athlete: F },
+  'evidence.watch.read': { owner: A, coach: A, reviewer: A, athlete: F },
+  'evidence.dryrun.read': { owner: A, coach: A, reviewer: F, athlete: F },
+  'evidence.suggestion.dismiss': { owner: A, coach: F, reviewer: F, athlete: F },
 };
 
 const ROLES: Role[] = ['owner', 'coach', 'reviewer', 'athlete'];
