@@ -16,7 +16,48 @@ import '@citation-js/plugin-csl';
  * title-cases the journal itself.
  */
 const bibtexConfig = plugins.config.get('@bibtex');
-if (bibtexConfig) bibtexConfig.parse.sentenceCase = 'english';
+if (bibtexConfig) {
+  bibtexConfig.parse.sentenceCase = 'english';
+  extendLatex(bibtexConfig.constants as unknown as LatexTables);
+}
+
+interface LatexTables {
+  commands: Record<string, string>;
+  formattingCommands: Record<string, string | undefined>;
+}
+
+/**
+ * Commands real reference-manager exports use that citation-js's tables (plugin-bibtex
+ * `constants`, its documented extension point) leave as raw `\TeX`: the TeX logos, spacing and
+ * hyphenation hints, ellipses, and box commands whose argument is plain text. Meanings from the
+ * LaTeX2e reference manual (latexref.xyz: "Text symbols", "\mbox", "Spacing in horizontal mode").
+ */
+function extendLatex(tables: LatexTables) {
+  Object.assign(tables.commands, {
+    TeX: 'TeX',
+    LaTeX: 'LaTeX',
+    LaTeXe: 'LaTeX2ε',
+    BibTeX: 'BibTeX',
+    XeTeX: 'XeTeX',
+    relax: '',
+    '/': '',
+    '-': '',
+    '@': '',
+    ',': '\u2009',
+    ' ': ' ',
+    ldots: '…',
+    dots: '…',
+    aa: 'å',
+    AA: 'Å',
+    S: '§',
+    P: '¶',
+    slash: '/',
+    nobreakspace: '\u00a0',
+    textapprox: '≈',
+  });
+  for (const name of ['mbox', 'hbox', 'text', 'textnormal', 'ensuremath', 'MakeUppercase', 'NoCaseChange'])
+    tables.formattingCommands[name] = undefined;
+}
 
 export { Cite, plugins };
 
