@@ -23,14 +23,18 @@ if (bibtexConfig) {
 
 interface LatexTables {
   commands: Record<string, string>;
+  mathCommands: Record<string, string>;
+  diacritics: Record<string, string>;
   formattingCommands: Record<string, string | undefined>;
 }
 
 /**
  * Commands real reference-manager exports use that citation-js's tables (plugin-bibtex
  * `constants`, its documented extension point) leave as raw `\TeX`: the TeX logos, spacing and
- * hyphenation hints, ellipses, and box commands whose argument is plain text. Meanings from the
- * LaTeX2e reference manual (latexref.xyz: "Text symbols", "\mbox", "Spacing in horizontal mode").
+ * hyphenation hints, ellipses, box commands whose argument is plain text, and the math symbols
+ * and accents of sports-science titles (V̇O₂, ±, ×, ≤). Meanings from the LaTeX2e reference manual
+ * (latexref.xyz: "Text symbols", "\mbox", "Spacing in horizontal mode", "Math accents", "Math
+ * symbols").
  */
 function extendLatex(tables: LatexTables) {
   Object.assign(tables.commands, {
@@ -55,6 +59,24 @@ function extendLatex(tables: LatexTables) {
     nobreakspace: '\u00a0',
     textapprox: '≈',
   });
+  Object.assign(tables.mathCommands, {
+    times: '×',
+    pm: '±',
+    mp: '∓',
+    cdot: '·',
+    leq: '≤',
+    le: '≤',
+    geq: '≥',
+    ge: '≥',
+    approx: '≈',
+    sim: '∼',
+    circ: '°',
+    infty: '∞',
+    rightarrow: '→',
+    to: '→',
+  });
+  // Math accents combine with the letter after them, like the text accents citation-js knows.
+  Object.assign(tables.diacritics, { dot: '\u0307', ddot: '\u0308', bar: '\u0304', hat: '\u0302', tilde: '\u0303' });
   for (const name of ['mbox', 'hbox', 'text', 'textnormal', 'ensuremath', 'MakeUppercase', 'NoCaseChange'])
     tables.formattingCommands[name] = undefined;
 }

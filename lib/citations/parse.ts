@@ -20,6 +20,9 @@ export interface ParsedSource {
   entries: ParsedEntry[];
 }
 
+/** Files saved by Windows tools often start with a byte-order mark, which is not text. */
+const withoutBom = (text: string) => text.replace(/^\uFEFF/, '');
+
 const BIBTEX_ENTRY_START = /^[ \t]*@[A-Za-z]+[ \t]*[{(]/m;
 const RIS_START = /^TY {1,2}- ?/m;
 
@@ -28,7 +31,7 @@ const RIS_START = /^TY {1,2}- ?/m;
  * tag line), or a list of DOIs (every word a DOI); null when none of these.
  */
 export function detectFormat(text: string): SourceFormat | null {
-  const trimmed = text.trim();
+  const trimmed = withoutBom(text).trim();
   if (!trimmed) return null;
   if (trimmed.startsWith('[') || trimmed.startsWith('{')) return 'csl-json';
   if (BIBTEX_ENTRY_START.test(trimmed)) return 'bibtex';
@@ -55,7 +58,8 @@ export interface SplitSource {
   entries: (() => ParsedEntry)[];
 }
 
-export function splitSource(text: string, format: SourceFormat | null = detectFormat(text)): SplitSource {
+export function splitSource(source: string, format: SourceFormat | null = detectFormat(source)): SplitSource {
+  const text = withoutBom(source);
   switch (format) {
     case 'doi':
       return { format, entries: parseDois(text).map((e) => () => e) };

@@ -72,14 +72,24 @@ const NAME_PARTS = ['family', 'given', 'literal', 'suffix', 'dropping-particle',
 const tidy = (value: string) => value.replace(/\s+/g, ' ').trim();
 
 /**
+ * Accents composed: `{\"\i}` decodes to a dotless ı plus a combining diaeresis, which is an ï once
+ * the dotless letter is undone (Unicode normalization form C, UAX #15).
+ */
+const compose = (value: string) =>
+  value
+    .replace(/ı(?=[\u0300-\u036f])/g, 'i')
+    .replace(/ȷ(?=[\u0300-\u036f])/g, 'j')
+    .normalize('NFC');
+
+/**
  * The item with every text field and name part as plain text (whitespace folded too), and the
  * title's italics, if any, in `custom.titleItalics`. Other fields pass through untouched.
  */
 export function plainCsl(item: CslItem): CslItem {
   const out: CslItem = { ...item };
   for (const field of TEXT_FIELDS) {
-    const value = out[field];
-    if (typeof value !== 'string') continue;
+    if (typeof out[field] !== 'string') continue;
+    const value = compose(out[field]);
     const plain = plainText(value);
     if (field === 'title' && plain.italics.length) {
       // Ranges are measured on the text as stored, so fold the whitespace first and shift by the trim.
@@ -100,7 +110,8 @@ export function plainCsl(item: CslItem): CslItem {
     out[field] = names.map((name) => {
       if (typeof name !== 'object' || name === null) return name;
       const copy: Record<string, unknown> = { ...name };
-      for (const part of NAME_PARTS) if (typeof copy[part] === 'string') copy[part] = tidy(plainText(copy[part]).text);
+      for (const part of NAME_PARTS)
+        if (typeof copy[part] === 'string') copy[part] = tidy(plainText(compose(copy[part])).text);
       return copy;
     });
   }
