@@ -102,28 +102,49 @@ function syntaxReason(error: unknown, chunk: Chunk, prefixLines: number): Error 
   return new Error(`${where[1]} (line ${chunk.line + Number(where[2]) - 1 - prefixLines})`);
 }
 
+/** Chunks re-read together when the whole file would not parse: one bad entry costs its group a second read. */
+const GROUP = 64;
+
+const sameLabels = (entries: RawEntry[], chunks: Chunk[]) =>
+  entries.length === chunks.length && entries.every((entry, i) => entry.label === chunks[i].label);
+
 /**
  * The raw entries of every chunk: the whole file in one parse when it is well formed (the fast
- * path, a single pass of citation-js's grammar), else chunk by chunk with the macros in front, so
- * the broken ones are known and the rest still read.
+ * path, a single pass of citation-js's grammar); else in groups with the macros in front, and
+ * chunk by chunk only inside a group that fails, so the broken entries are known and the rest
+ * still read at close to the speed of the fast path.
  */
 function readChunks(text: string, macros: Chunk[], chunks: Chunk[]): (RawEntry | Error)[] {
   try {
     const whole = readRaw(text);
-    if (whole.length === chunks.length && whole.every((entry, i) => entry.label === chunks[i].label)) return whole;
+    if (sameLabels(whole, chunks)) return whole;
   } catch {
     // Some entry is malformed: fall through and find which.
   }
   const prefix = macros.map((m) => m.text).join('\n');
   const prefixLines = prefix ? prefix.split('\n').length : 0;
-  return chunks.map((chunk) => {
+  const read = (body: string) => readRaw(prefix ? `${prefix}\n${body}` : body);
+  const out: (RawEntry | Error)[] = [];
+  for (let g = 0; g < chunks.length; g += GROUP) {
+    const group = chunks.slice(g, g + GROUP);
     try {
-      const [entry] = readRaw(prefix ? `${prefix}\n${chunk.text}` : chunk.text);
-      return entry ?? new Error('no entry found');
-    } catch (error) {
-      return syntaxReason(error, chunk, prefixLines);
+      const entries = read(group.map((c) => c.text).join('\n'));
+      if (sameLabels(entries, group)) {
+        out.push(...entries);
+        continue;
+      }
+    } catch {
+      // Read this group's chunks one by one.
     }
-  });
+    for (const chunk of group) {
+      try {
+        out.push(read(chunk.text)[0] ?? new Error('no entry found'));
+      } catch (error) {
+        out.push(syntaxReason(error, chunk, prefixLines));
+      }
+    }
+  }
+  return out;
 }
 
 const keysOf = (value: unknown) =>
@@ -186,21 +207,99 @@ export function bibtexEntries(text: string): (() => ParsedEntry)[] {
     const where = at('BibTeX entry', chunk.line);
     const title = fallbackTitle(chunk);
     if (entry instanceof Error) return failure(index, title, where, entry);
-    try {
-      const complete = withXdata(entry, xdata);
-      const family = withParents(complete, byLabel).map((e, i) => (i ? withXdata(e, xdata) : e));
-      const [item] = plugins.input.chain(family, {
-        generateGraph: false,
-        forceType: '@biblatex/entries+list',
-      }) as CslItem[];
-      const parsed = accept(index, item, title, where);
-      if (parsed.kind === 'parsed')
-        parsed.csl.title = lowerHyphenatedParts(parsed.csl.title as string, rawBibtexTitle(chunk.text));
-      return parsed;
-    } catch (error) {
-      return failure(index, title, where, error);
-    }
+    const complete = withXdata(entry, xdata);
+    const parents = withParents(complete, byLabel)
+      .slice(1)
+      .map((e) => withXdata(e, xdata));
+    const item = decode(complete, parents);
+    if (item instanceof Error) return failure(index, title, where, item);
+    const parsed = accept(index, item, title, where);
+    if (parsed.kind === 'parsed')
+      parsed.csl.title = lowerHyphenatedParts(parsed.csl.title as string, rawBibtexTitle(chunk.text));
+    return parsed;
   });
+}
+
+/**
+ * Fields the library reads (reference, dates, identifiers, what a design is suggested from). A
+ * LaTeX slip in any other field — an annotation, a file path, a reference manager's group list —
+ * must not cost the coach the study, so when the whole entry does not decode, it is decoded
+ * again with these alone.
+ */
+const CORE_FIELDS = new Set([
+  'title',
+  'subtitle',
+  'titleaddon',
+  'shorttitle',
+  'author',
+  'editor',
+  'translator',
+  'journal',
+  'journaltitle',
+  'journalsubtitle',
+  'shortjournal',
+  'booktitle',
+  'booksubtitle',
+  'maintitle',
+  'series',
+  'year',
+  'date',
+  'month',
+  'volume',
+  'number',
+  'issue',
+  'pages',
+  'eid',
+  'edition',
+  'doi',
+  'url',
+  'urldate',
+  'eprint',
+  'eprinttype',
+  'isbn',
+  'issn',
+  'publisher',
+  'institution',
+  'school',
+  'organization',
+  'address',
+  'location',
+  'type',
+  'howpublished',
+  'keywords',
+  'language',
+  'crossref',
+]);
+
+const decodeOnce = (family: RawEntry[]) =>
+  (plugins.input.chain(family, { generateGraph: false, forceType: '@biblatex/entries+list' }) as CslItem[])[0];
+
+/** The entry as CSL-JSON (its crossref parents beside it), or why it cannot be, naming the field at fault. */
+function decode(entry: RawEntry, parents: RawEntry[]): CslItem | Error {
+  try {
+    return decodeOnce([entry, ...parents]);
+  } catch {
+    // Try again with the fields the library reads, below.
+  }
+  const core = Object.fromEntries(Object.entries(entry.properties).filter(([field]) => CORE_FIELDS.has(field)));
+  try {
+    return decodeOnce([{ ...entry, properties: core }, ...parents]);
+  } catch (error) {
+    const culprit = Object.keys(core).find((field) => {
+      try {
+        decodeOnce([{ ...entry, properties: { [field]: core[field] } }]);
+        return false;
+      } catch {
+        return true;
+      }
+    });
+    // The decoder's position is inside the field's value, not the file: keep only what it expected.
+    const detail = (error instanceof Error ? error.message.split('\n')[0] : String(error)).replace(
+      / at line \d+ col \d+:?$/,
+      '',
+    );
+    return new Error(culprit ? `its ${culprit} field does not read as LaTeX (${detail})` : detail);
+  }
 }
 
 export function parseBibtex(text: string): ParsedEntry[] {

@@ -26,6 +26,7 @@ interface LatexTables {
   mathCommands: Record<string, string>;
   diacritics: Record<string, string>;
   formattingCommands: Record<string, string | undefined>;
+  formattingEnvs: Record<string, string | undefined>;
 }
 
 /**
@@ -56,6 +57,9 @@ function extendLatex(tables: LatexTables) {
     S: '§',
     P: '¶',
     slash: '/',
+    emdash: '—',
+    endash: '–',
+    hyphen: '-',
     nobreakspace: '\u00a0',
     textapprox: '≈',
   });
@@ -74,11 +78,20 @@ function extendLatex(tables: LatexTables) {
     infty: '∞',
     rightarrow: '→',
     to: '→',
+    langle: '⟨',
+    rangle: '⟩',
+    lozenge: '◊',
+    log: 'log',
+    ln: 'ln',
+    exp: 'exp',
   });
   // Math accents combine with the letter after them, like the text accents citation-js knows.
   Object.assign(tables.diacritics, { dot: '\u0307', ddot: '\u0308', bar: '\u0304', hat: '\u0302', tilde: '\u0303' });
-  for (const name of ['mbox', 'hbox', 'text', 'textnormal', 'ensuremath', 'MakeUppercase', 'NoCaseChange'])
+  for (const name of ['mbox', 'hbox', 'text', 'textnormal', 'ensuremath', 'NoCaseChange', 'mathrm', 'mathsf', 'mathtt'])
     tables.formattingCommands[name] = undefined;
+  Object.assign(tables.formattingCommands, { mathit: 'italics', mathbf: 'bold' });
+  // Babel-era script switches (bibcyr: Cyrillic) carry no meaning once the text is Unicode.
+  tables.formattingEnvs.bibcyr = undefined;
 }
 
 export { Cite, plugins };
