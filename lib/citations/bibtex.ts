@@ -203,15 +203,38 @@ export function bibtexEntries(text: string): (() => ParsedEntry)[] {
     else byLabel.set(entry.label, entry);
   }
   const works = all.flatMap((chunk, i) => (chunk.type === 'xdata' ? [] : [{ chunk, entry: raw[i] }]));
-  return works.map(({ chunk, entry }, index) => () => {
-    const where = at('BibTeX entry', chunk.line);
-    const title = fallbackTitle(chunk);
-    if (entry instanceof Error) return failure(index, title, where, entry);
-    const complete = withXdata(entry, xdata);
-    const parents = withParents(complete, byLabel)
+  const complete = works.map(({ entry }) => (entry instanceof Error ? entry : withXdata(entry, xdata)));
+  const parentsOf = (entry: RawEntry) =>
+    withParents(entry, byLabel)
       .slice(1)
       .map((e) => withXdata(e, xdata));
-    const item = decode(complete, parents);
+
+  // Decoded a batch at a time (one citation-js call per batch, not per entry), when the batch's
+  // first entry is asked for; an entry of a batch that fails is decoded on its own.
+  const decoded = new Map<number, CslItem | Error>();
+  const decodeBatch = (first: number) => {
+    const members = complete
+      .slice(first, first + DECODE_BATCH)
+      .map((entry, i) => ({ index: first + i, entry }))
+      .filter((m): m is { index: number; entry: RawEntry } => !(m.entry instanceof Error));
+    const mine = new Set(members.map((m) => m.entry));
+    const parents = [...new Set(members.flatMap((m) => parentsOf(m.entry)))].filter((p) => !mine.has(p));
+    try {
+      const items = decodeAll([...members.map((m) => m.entry), ...parents]);
+      members.forEach((m, i) => decoded.set(m.index, items[i]));
+    } catch {
+      for (const m of members) decoded.set(m.index, decode(m.entry, parentsOf(m.entry)));
+    }
+  };
+
+  return works.map(({ chunk }, index) => () => {
+    const where = at('BibTeX entry', chunk.line);
+    const title = fallbackTitle(chunk);
+    const entry = complete[index];
+    if (entry instanceof Error) return failure(index, title, where, entry);
+    if (!decoded.has(index)) decodeBatch(index);
+    const item = decoded.get(index)!;
+    decoded.delete(index);
     if (item instanceof Error) return failure(index, title, where, item);
     const parsed = accept(index, item, title, where);
     if (parsed.kind === 'parsed')
@@ -271,8 +294,12 @@ const CORE_FIELDS = new Set([
   'crossref',
 ]);
 
-const decodeOnce = (family: RawEntry[]) =>
-  (plugins.input.chain(family, { generateGraph: false, forceType: '@biblatex/entries+list' }) as CslItem[])[0];
+/** Entries decoded together, in order; crossref parents among them resolve (citation-js's registry is the list). */
+const decodeAll = (entries: RawEntry[]) =>
+  plugins.input.chain(entries, { generateGraph: false, forceType: '@biblatex/entries+list' }) as CslItem[];
+const decodeOnce = (family: RawEntry[]) => decodeAll(family)[0];
+/** Entries per citation-js call when decoding. */
+const DECODE_BATCH = 100;
 
 /** The entry as CSL-JSON (its crossref parents beside it), or why it cannot be, naming the field at fault. */
 function decode(entry: RawEntry, parents: RawEntry[]): CslItem | Error {
