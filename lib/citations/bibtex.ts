@@ -1,6 +1,6 @@
 import type { CslItem } from './csl';
 import { FORCED_TYPES, plugins } from './engine';
-import { accept, at, failure, linesAt, type ParsedEntry } from './entry';
+import { accept, at, failure, linesAt, nothingFound, type ParsedEntry } from './entry';
 
 /**
  * BibTeX and biblatex files as reference managers export them. citation-js does the reading:
@@ -185,15 +185,7 @@ function withParents(entry: RawEntry, byLabel: Map<string, RawEntry>): RawEntry[
 /** The entries of a BibTeX text, each decoded only when its thunk is called (for progress in batches). */
 export function bibtexEntries(text: string): (() => ParsedEntry)[] {
   const { macros, entries: all } = splitBibtex(text);
-  if (!all.length)
-    return [
-      () => ({
-        kind: 'failed',
-        index: 0,
-        title: null,
-        reason: 'No BibTeX entries found (an entry starts with @article{ or similar).',
-      }),
-    ];
+  if (!all.length) return nothingFound('No BibTeX entries found (an entry starts with @article{ or similar).');
   const raw = readChunks(text, macros, all);
   const xdata = new Map<string, RawEntry>();
   const byLabel = new Map<string, RawEntry>();

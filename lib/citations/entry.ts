@@ -14,6 +14,11 @@ export type ParsedEntry =
 export const at = (what: string, line: number | null) =>
   line === null ? `this ${what}` : `the ${what} at line ${line}`;
 
+/** A text with no entry at all: one failed result saying what an entry looks like. */
+export const nothingFound = (reason: string): (() => ParsedEntry)[] => [
+  () => ({ kind: 'failed', index: 0, title: null, reason }),
+];
+
 const capital = (text: string) => text.charAt(0).toUpperCase() + text.slice(1);
 
 /**

@@ -2,7 +2,7 @@ import { bibtexEntries } from './bibtex';
 import type { CslItem } from './csl';
 import { normalizeDoi } from './doi';
 import { FORCED_TYPES, plugins } from './engine';
-import { accept, at, failure, linesAt, type ParsedEntry } from './entry';
+import { accept, at, failure, linesAt, nothingFound, type ParsedEntry } from './entry';
 
 /**
  * Turning pasted or uploaded library text into CSL-JSON items, one result per entry, so one
@@ -72,14 +72,7 @@ export function splitSource(source: string, format: SourceFormat | null = detect
     default:
       return {
         format: null,
-        entries: [
-          () => ({
-            kind: 'failed',
-            index: 0,
-            title: null,
-            reason: 'Could not tell the format: paste a DOI, BibTeX, RIS or CSL-JSON.',
-          }),
-        ],
+        entries: nothingFound('Could not tell the format: paste a DOI, BibTeX, RIS or CSL-JSON.'),
       };
   }
 }
@@ -132,15 +125,7 @@ function risTitle(chunk: string): string | null {
 
 function risEntries(text: string): (() => ParsedEntry)[] {
   const records = splitRis(text);
-  if (!records.length)
-    return [
-      () => ({
-        kind: 'failed',
-        index: 0,
-        title: null,
-        reason: 'No RIS records found (a record starts with a TY line and ends with ER).',
-      }),
-    ];
+  if (!records.length) return nothingFound('No RIS records found (a record starts with a TY line and ends with ER).');
   return records.map((record, index) => () => {
     const title = risTitle(record.text);
     const where = at('RIS record', record.line);
