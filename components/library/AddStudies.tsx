@@ -5,12 +5,14 @@ import { useId, useRef, useState, type FormEvent } from 'react';
 import { useSWRConfig } from 'swr';
 import { Button } from '@/components/ui/Button';
 import { cn } from '@/components/ui/cn';
+import { DESIGN_LABEL } from '@/components/review/labels';
 import { Spinner } from '@/components/ui/Spinner';
 import { TextAreaField } from '@/components/ui/Field';
 import type { ImportResultDTO } from '@/lib/reviews/types';
-import { apiStream, errorMessage } from '@/lib/swr/fetcher';
+import { apiFetch, apiStream, errorMessage } from '@/lib/swr/fetcher';
 import { isStudiesKey } from '@/lib/swr/keys';
 import { MAX_SOURCE_CHARS } from '@/lib/validation/studies';
+import { SuggestedDesign } from './SuggestedDesign';
 
 interface Progress {
   phase: 'sending' | 'reading' | 'looking-up' | 'saving' | 'done';
@@ -51,6 +53,8 @@ export function AddStudies({ teamId }: { teamId: number }) {
   const [results, setResults] = useState<ImportResultDTO[] | null>(null);
   const [filter, setFilter] = useState<'all' | ImportResultDTO['status']>('all');
   const [running, setRunning] = useState(false);
+  const [confirmed, setConfirmed] = useState<ReadonlySet<number>>(new Set());
+  const [confirming, setConfirming] = useState<{ done: number; total: number } | null>(null);
   const abort = useRef<AbortController | null>(null);
   const fileInput = useRef<HTMLInputElement>(null);
   const fileId = useId();
@@ -61,6 +65,7 @@ export function AddStudies({ teamId }: { teamId: number }) {
     setError(null);
     setResults(null);
     setFilter('all');
+    setConfirmed(new Set());
     if (file) {
       if (!ACCEPTED.some((ext) => file.name.toLowerCase().endsWith(ext))) {
         setError(`“${file.name}” is not a .bib, .ris or .json file.`);
@@ -134,6 +139,40 @@ export function AddStudies({ teamId }: { teamId: number }) {
   const counts = { added: 0, duplicate: 0, failed: 0 };
   for (const r of results ?? []) counts[r.status] += 1;
   const visible = (results ?? []).filter((r) => filter === 'all' || r.status === filter);
+  const markConfirmed = (studyId: number) => setConfirmed((set) => new Set(set).add(studyId));
+  // One suggestion per study (a study matched twice is offered once).
+  const suggestions = [
+    ...new Map(
+      (results ?? []).flatMap((r) =>
+        r.studyId && r.suggestedDesign && !confirmed.has(r.studyId) ? [[r.studyId, r.suggestedDesign] as const] : [],
+      ),
+    ),
+  ];
+
+  /** Confirms every open suggestion, a few requests at a time, each through the study's own PATCH. */
+  const confirmAll = async () => {
+    const queue = [...suggestions];
+    setConfirming({ done: 0, total: queue.length });
+    setError(null);
+    let done = 0;
+    const worker = async () => {
+      for (let next = queue.shift(); next; next = queue.shift()) {
+        const [studyId, design] = next;
+        await apiFetch(`/api/studies/${studyId}`, { method: 'PATCH', json: { design } });
+        markConfirmed(studyId);
+        done += 1;
+        setConfirming({ done, total: suggestions.length });
+      }
+    };
+    try {
+      await Promise.all([worker(), worker(), worker()]);
+    } catch (e) {
+      setError(`Some designs were not confirmed: ${errorMessage(e)}`);
+    } finally {
+      setConfirming(null);
+      void mutate(isStudiesKey);
+    }
+  };
 
   return (
     <section aria-labelledby="add-studies-title" className="border-line bg-paper-raised shadow-card rounded-lg border">
@@ -245,6 +284,21 @@ export function AddStudies({ teamId }: { teamId: number }) {
           <p className="text-sm font-semibold" role="status">
             {counts.added} added · {counts.duplicate} already in the library · {counts.failed} failed
           </p>
+          {suggestions.length > 0 && (
+            <div className="bg-chalk-50 border-line flex flex-wrap items-center gap-2 rounded-md border px-3 py-2 text-sm">
+              <span>
+                {suggestions.length === 1
+                  ? '1 study names its design in the title or keywords.'
+                  : `${suggestions.length.toLocaleString()} studies name their design in the title or keywords.`}{' '}
+                Check the suggestions below, then confirm them so these studies can be appraised.
+              </span>
+              <Button variant="secondary" onClick={confirmAll} disabled={confirming !== null}>
+                {confirming
+                  ? `Confirming ${confirming.done.toLocaleString()} of ${confirming.total.toLocaleString()}…`
+                  : `Confirm all ${suggestions.length.toLocaleString()}`}
+              </Button>
+            </div>
+          )}
           <div role="group" aria-label="Show" className="flex flex-wrap gap-1">
             {(['all', 'added', 'duplicate', 'failed'] as const).map((f) => (
               <button
@@ -288,6 +342,15 @@ export function AddStudies({ teamId }: { teamId: number }) {
                     <span>{r.title ?? `Entry ${r.index + 1}`}</span>
                   )}
                   {r.reason && <span className="text-ink-muted block">{r.reason}</span>}
+                  {r.studyId && r.suggestedDesign && (
+                    <span className="mt-1 block">
+                      {confirmed.has(r.studyId) ? (
+                        <span className="text-success-700">Design set: {DESIGN_LABEL[r.suggestedDesign]} ✓</span>
+                      ) : (
+                        <SuggestedDesign studyId={r.studyId} design={r.suggestedDesign} onConfirmed={markConfirmed} />
+                      )}
+                    </span>
+                  )}
                 </span>
               </li>
             ))}

@@ -12,6 +12,7 @@ import { LocalTime } from '@/components/review/LocalTime';
 import { STUDY_DESIGNS } from '@/lib/reviews/types';
 import { useStudies } from '@/lib/swr/use-studies';
 import { NoticeBadge } from './NoticeBadge';
+import { SuggestedDesign } from './SuggestedDesign';
 
 type SortField = 'citation' | 'year' | 'design' | 'added';
 const COLUMNS: { key: SortField | null; label: string; className?: string }[] = [
@@ -203,6 +204,7 @@ export function StudyTable({
                       .filter(Boolean)
                       .join(' · ')}
                   </p>
+                  {!s.design && s.suggestedDesign && <SuggestedDesign studyId={s.id} design={s.suggestedDesign} />}
                 </li>
               ))}
             </ul>
@@ -267,7 +269,13 @@ export function StudyTable({
                     </th>
                     <td className="px-4 py-3 tabular-nums">{s.year ?? '—'}</td>
                     <td className="px-4 py-3">
-                      {s.design ? DESIGN_LABEL[s.design] : <span className="text-ink-muted">not recorded</span>}
+                      {s.design ? (
+                        DESIGN_LABEL[s.design]
+                      ) : s.suggestedDesign ? (
+                        <SuggestedDesign studyId={s.id} design={s.suggestedDesign} />
+                      ) : (
+                        <span className="text-ink-muted">not recorded</span>
+                      )}
                     </td>
                     <td className="px-4 py-3">
                       {s.population ? TRAINING_STATUS_LABEL[s.population] : '—'}

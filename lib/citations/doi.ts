@@ -1,3 +1,5 @@
+import { plainCsl } from './rich-text';
+
 /**
  * DOIs: recognising, normalising and looking them up through the DOI content-negotiation
  * service (the resolver answers `Accept: application/vnd.citationstyles.csl+json` with the
@@ -109,5 +111,6 @@ export async function lookupDoi(
   ) {
     return { ok: false, reason: `The record for DOI ${doi} has no title, so it was not added.` };
   }
-  return { ok: true, csl: { ...(item as Record<string, unknown>), DOI: doi } };
+  // DOI registries send titles with rich-text tags too (<i>, <sub>); store them as plain text.
+  return { ok: true, csl: plainCsl({ ...(item as Record<string, unknown>), DOI: doi }) };
 }

@@ -16,7 +16,83 @@ import '@citation-js/plugin-csl';
  * title-cases the journal itself.
  */
 const bibtexConfig = plugins.config.get('@bibtex');
-if (bibtexConfig) bibtexConfig.parse.sentenceCase = 'english';
+if (bibtexConfig) {
+  bibtexConfig.parse.sentenceCase = 'english';
+  extendLatex(bibtexConfig.constants as unknown as LatexTables);
+}
+
+interface LatexTables {
+  commands: Record<string, string>;
+  mathCommands: Record<string, string>;
+  diacritics: Record<string, string>;
+  formattingCommands: Record<string, string | undefined>;
+  formattingEnvs: Record<string, string | undefined>;
+}
+
+/**
+ * Commands real reference-manager exports use that citation-js's tables (plugin-bibtex
+ * `constants`, its documented extension point) leave as raw `\TeX`: the TeX logos, spacing and
+ * hyphenation hints, ellipses, box commands whose argument is plain text, and the math symbols
+ * and accents of sports-science titles (V̇O₂, ±, ×, ≤). Meanings from the LaTeX2e reference manual
+ * (latexref.xyz: "Text symbols", "\mbox", "Spacing in horizontal mode", "Math accents", "Math
+ * symbols").
+ */
+function extendLatex(tables: LatexTables) {
+  Object.assign(tables.commands, {
+    TeX: 'TeX',
+    LaTeX: 'LaTeX',
+    LaTeXe: 'LaTeX2ε',
+    BibTeX: 'BibTeX',
+    XeTeX: 'XeTeX',
+    relax: '',
+    '/': '',
+    '-': '',
+    '@': '',
+    ',': '\u2009',
+    ' ': ' ',
+    ldots: '…',
+    dots: '…',
+    aa: 'å',
+    AA: 'Å',
+    S: '§',
+    P: '¶',
+    slash: '/',
+    emdash: '—',
+    endash: '–',
+    hyphen: '-',
+    nobreakspace: '\u00a0',
+    textapprox: '≈',
+  });
+  Object.assign(tables.mathCommands, {
+    times: '×',
+    pm: '±',
+    mp: '∓',
+    cdot: '·',
+    leq: '≤',
+    le: '≤',
+    geq: '≥',
+    ge: '≥',
+    approx: '≈',
+    sim: '∼',
+    circ: '°',
+    infty: '∞',
+    rightarrow: '→',
+    to: '→',
+    langle: '⟨',
+    rangle: '⟩',
+    lozenge: '◊',
+    log: 'log',
+    ln: 'ln',
+    exp: 'exp',
+  });
+  // Math accents combine with the letter after them, like the text accents citation-js knows.
+  Object.assign(tables.diacritics, { dot: '\u0307', ddot: '\u0308', bar: '\u0304', hat: '\u0302', tilde: '\u0303' });
+  for (const name of ['mbox', 'hbox', 'text', 'textnormal', 'ensuremath', 'NoCaseChange', 'mathrm', 'mathsf', 'mathtt'])
+    tables.formattingCommands[name] = undefined;
+  Object.assign(tables.formattingCommands, { mathit: 'italics', mathbf: 'bold' });
+  // Babel-era script switches (bibcyr: Cyrillic) carry no meaning once the text is Unicode.
+  tables.formattingEnvs.bibcyr = undefined;
+}
 
 export { Cite, plugins };
 

@@ -1,6 +1,8 @@
-import { cleanCsl, cslTitle, type CslItem } from './csl';
+import { bibtexEntries } from './bibtex';
+import type { CslItem } from './csl';
 import { normalizeDoi } from './doi';
 import { FORCED_TYPES, plugins } from './engine';
+import { accept, at, failure, linesAt, nothingFound, type ParsedEntry } from './entry';
 
 /**
  * Turning pasted or uploaded library text into CSL-JSON items, one result per entry, so one
@@ -10,15 +12,16 @@ import { FORCED_TYPES, plugins } from './engine';
 
 export type SourceFormat = 'doi' | 'bibtex' | 'ris' | 'csl-json';
 
-export type ParsedEntry =
-  | { kind: 'parsed'; index: number; csl: CslItem }
-  | { kind: 'doi'; index: number; doi: string }
-  | { kind: 'failed'; index: number; title: string | null; reason: string };
+export type { ParsedEntry };
+export { lowerHyphenatedParts, splitBibtex } from './bibtex';
 
 export interface ParsedSource {
   format: SourceFormat | null;
   entries: ParsedEntry[];
 }
+
+/** Files saved by Windows tools often start with a byte-order mark, which is not text. */
+const withoutBom = (text: string) => text.replace(/^\uFEFF/, '');
 
 const BIBTEX_ENTRY_START = /^[ \t]*@[A-Za-z]+[ \t]*[{(]/m;
 const RIS_START = /^TY {1,2}- ?/m;
@@ -28,7 +31,7 @@ const RIS_START = /^TY {1,2}- ?/m;
  * tag line), or a list of DOIs (every word a DOI); null when none of these.
  */
 export function detectFormat(text: string): SourceFormat | null {
-  const trimmed = text.trim();
+  const trimmed = withoutBom(text).trim();
   if (!trimmed) return null;
   if (trimmed.startsWith('[') || trimmed.startsWith('{')) return 'csl-json';
   if (BIBTEX_ENTRY_START.test(trimmed)) return 'bibtex';
@@ -55,7 +58,8 @@ export interface SplitSource {
   entries: (() => ParsedEntry)[];
 }
 
-export function splitSource(text: string, format: SourceFormat | null = detectFormat(text)): SplitSource {
+export function splitSource(source: string, format: SourceFormat | null = detectFormat(source)): SplitSource {
+  const text = withoutBom(source);
   switch (format) {
     case 'doi':
       return { format, entries: parseDois(text).map((e) => () => e) };
@@ -68,14 +72,7 @@ export function splitSource(text: string, format: SourceFormat | null = detectFo
     default:
       return {
         format: null,
-        entries: [
-          () => ({
-            kind: 'failed',
-            index: 0,
-            title: null,
-            reason: 'Could not tell the format: paste a DOI, BibTeX, RIS or CSL-JSON.',
-          }),
-        ],
+        entries: nothingFound('Could not tell the format: paste a DOI, BibTeX, RIS or CSL-JSON.'),
       };
   }
 }
@@ -98,121 +95,28 @@ function parseDois(text: string): ParsedEntry[] {
     });
 }
 
-/** One item from citation-js, checked: it must have a title to be a study. */
-function accept(index: number, items: CslItem[], fallbackTitle: string | null, what: string): ParsedEntry {
-  if (!items.length || !items[0] || typeof items[0] !== 'object' || !Object.keys(items[0]).length) {
-    return { kind: 'failed', index, title: fallbackTitle, reason: `Could not read this ${what}; check its syntax.` };
-  }
-  const csl = cleanCsl(items[0]);
-  if (!cslTitle(csl)) return { kind: 'failed', index, title: fallbackTitle, reason: `This ${what} has no title.` };
-  return { kind: 'parsed', index, csl };
-}
-
-function failure(index: number, title: string | null, what: string, error: unknown): ParsedEntry {
-  // citation-js syntax errors quote the offending line; keep only the first line of it.
-  const detail = error instanceof Error ? error.message.split('\n')[0].slice(0, 160) : 'unreadable';
-  return { kind: 'failed', index, title, reason: `Could not read this ${what}: ${detail}.` };
-}
-
-// ---------------------------------------------------------------------------------------------
-// BibTeX
-// ---------------------------------------------------------------------------------------------
-
-/**
- * Splits at each line that opens an entry (`@article{`, `@book(` …). @string macros are kept
- * and prefixed to every entry so abbreviations still expand; @comment and @preamble are skipped.
- */
-export function splitBibtex(text: string): { macros: string; entries: string[] } {
-  const starts: number[] = [];
-  const pattern = /^[ \t]*@[A-Za-z]+[ \t]*[{(]/gm;
-  for (let m = pattern.exec(text); m; m = pattern.exec(text)) starts.push(m.index);
-  const macros: string[] = [];
-  const entries: string[] = [];
-  starts.forEach((start, i) => {
-    const chunk = text.slice(start, starts[i + 1] ?? text.length).trim();
-    const type = chunk.match(/^@([A-Za-z]+)/)?.[1].toLowerCase();
-    if (type === 'string') macros.push(chunk);
-    else if (type !== 'comment' && type !== 'preamble') entries.push(chunk);
-  });
-  return { macros: macros.join('\n'), entries };
-}
-
-/** The title field as typed, braces included (single-line titles only; null otherwise). */
-function rawBibtexTitle(chunk: string): string | null {
-  return chunk.match(/^\s*title\s*=\s*[{"](.+?)[}"]\s*,?\s*$/im)?.[1] ?? null;
-}
-
-/**
- * citation-js's sentence case lower-cases unprotected words but leaves both halves of a
- * hyphenated compound as typed ("Twelve-Week"); APA sentence case lower-cases them like any
- * other word, except the first word of the title or of a subtitle ("Cold-water immersion …
- * twelve-week gains"; American Psychological Association, 2020, Publication Manual, 7th ed.,
- * ch. 6, sentence case). Only compounds of plain capitalized words are touched (acronyms such
- * as "MVC-Based" keep their capitals), and none the raw BibTeX protected with braces.
- */
-export function lowerHyphenatedParts(title: string, rawTitle: string | null): string {
-  if (rawTitle === null) return title;
-  const protectedText = [...rawTitle.matchAll(/\{([^{}]*)\}/g)].map((m) => m[1]).join(' ');
-  return title.replace(
-    /(?<![\p{L}-])(\p{L}\p{Ll}*)((?:-\p{L}\p{Ll}*)+)(?![\p{L}-])/gu,
-    (whole: string, first: string, rest: string, offset: number) => {
-      if (protectedText.includes(whole)) return whole;
-      const startsSentence = offset === 0 || /[:.?!]\s*$/.test(title.slice(0, offset));
-      return `${startsSentence ? first : first.toLowerCase()}${rest.toLowerCase()}`;
-    },
-  );
-}
-
-function bibtexTitle(chunk: string): string | null {
-  const title = chunk.match(/^\s*title\s*=\s*[{"]\s*(.+?)\s*[}"]\s*,?\s*$/im)?.[1];
-  if (title) return title.replace(/[{}]/g, '');
-  return chunk.match(/^@[A-Za-z]+\s*[{(]\s*([^,\s]+)/)?.[1] ?? null;
-}
-
-function bibtexEntries(text: string): (() => ParsedEntry)[] {
-  const { macros, entries } = splitBibtex(text);
-  if (!entries.length)
-    return [
-      () => ({
-        kind: 'failed',
-        index: 0,
-        title: null,
-        reason: 'No BibTeX entries found (an entry starts with @article{ or similar).',
-      }),
-    ];
-  return entries.map((chunk, index) => () => {
-    const title = bibtexTitle(chunk);
-    try {
-      const items = plugins.input.chain(macros ? `${macros}\n${chunk}` : chunk, {
-        generateGraph: false,
-        forceType: FORCED_TYPES.bibtex,
-      });
-      const entry = accept(index, items, title, 'BibTeX entry');
-      if (entry.kind === 'parsed')
-        entry.csl.title = lowerHyphenatedParts(entry.csl.title as string, rawBibtexTitle(chunk));
-      return entry;
-    } catch (error) {
-      return failure(index, title, 'BibTeX entry', error);
-    }
-  });
-}
-
-export function parseBibtex(text: string): ParsedEntry[] {
-  return bibtexEntries(text).map((parse) => parse());
-}
-
 // ---------------------------------------------------------------------------------------------
 // RIS
 // ---------------------------------------------------------------------------------------------
 
-/** Splits after each end-of-record tag (ER). */
-export function splitRis(text: string): string[] {
-  return text
-    .replace(/\r\n?/g, '\n')
-    .split(/^ER {1,2}-.*$/m)
-    .map((chunk) => chunk.trim())
-    .filter((chunk) => RIS_START.test(chunk))
-    .map((chunk) => `${chunk.slice(chunk.search(RIS_START))}\nER  - \n`);
+/** Splits after each end-of-record tag (ER), noting the line each record starts on. */
+export function splitRis(text: string): { line: number; text: string }[] {
+  const normalized = text.replace(/\r\n?/g, '\n');
+  const records: { start: number; text: string }[] = [];
+  const end = /^ER {1,2}-.*$/gm;
+  let from = 0;
+  for (let m = end.exec(normalized); ; m = end.exec(normalized)) {
+    const chunk = normalized.slice(from, m ? m.index : normalized.length);
+    const start = chunk.search(RIS_START);
+    if (start !== -1) records.push({ start: from + start, text: `${chunk.slice(start).trim()}\nER  - \n` });
+    if (!m) break;
+    from = m.index + m[0].length;
+  }
+  const lines = linesAt(
+    normalized,
+    records.map((r) => r.start),
+  );
+  return records.map((r, i) => ({ line: lines[i], text: r.text }));
 }
 
 function risTitle(chunk: string): string | null {
@@ -221,26 +125,15 @@ function risTitle(chunk: string): string | null {
 
 function risEntries(text: string): (() => ParsedEntry)[] {
   const records = splitRis(text);
-  if (!records.length)
-    return [
-      () => ({
-        kind: 'failed',
-        index: 0,
-        title: null,
-        reason: 'No RIS records found (a record starts with a TY line and ends with ER).',
-      }),
-    ];
-  return records.map((chunk, index) => () => {
-    const title = risTitle(chunk);
+  if (!records.length) return nothingFound('No RIS records found (a record starts with a TY line and ends with ER).');
+  return records.map((record, index) => () => {
+    const title = risTitle(record.text);
+    const where = at('RIS record', record.line);
     try {
-      return accept(
-        index,
-        plugins.input.chain(chunk, { generateGraph: false, forceType: FORCED_TYPES.ris }),
-        title,
-        'RIS record',
-      );
+      const [item] = plugins.input.chain(record.text, { generateGraph: false, forceType: FORCED_TYPES.ris });
+      return accept(index, item, title, where);
     } catch (error) {
-      return failure(index, title, 'RIS record', error);
+      return failure(index, title, where, error);
     }
   });
 }
@@ -267,15 +160,12 @@ export function parseCslJson(text: string): ParsedEntry[] {
       return { kind: 'failed', index, title: null, reason: 'A CSL-JSON entry must be an object.' };
     }
     const title = typeof (item as CslItem).title === 'string' ? ((item as CslItem).title as string) : null;
+    const where = at('CSL-JSON entry', null);
     try {
-      return accept(
-        index,
-        plugins.input.chain(item, { generateGraph: false, forceType: FORCED_TYPES.csl }),
-        title,
-        'CSL-JSON entry',
-      );
+      const [csl] = plugins.input.chain(item, { generateGraph: false, forceType: FORCED_TYPES.csl });
+      return accept(index, csl, title, where);
     } catch (error) {
-      return failure(index, title, 'CSL-JSON entry', error);
+      return failure(index, title, where, error);
     }
   });
 }

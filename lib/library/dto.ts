@@ -1,3 +1,4 @@
+import { suggestDesign } from '@/lib/citations/design';
 import type { Study } from '@/models';
 import type { EffectDataDTO, StudyDTO, StudyDesign, TrainingStatus } from '@/lib/reviews/types';
 
@@ -13,6 +14,7 @@ export function toStudyDTO(study: Study, appraisalCount = 0): StudyDTO {
     year: study.year,
     journal: study.journal,
     design: study.design as StudyDesign | null,
+    suggestedDesign: study.design ? null : suggestDesign(study.csl),
     population: study.population as TrainingStatus | null,
     injured: study.injured,
     n: study.n,

@@ -1,7 +1,8 @@
-import { Op, type Transaction } from 'sequelize';
+import { Op } from 'sequelize';
 import { AppError } from '@/lib/api/errors';
 import { recordEvent } from '@/lib/audit/record';
 import type { CslItem } from '@/lib/citations/csl';
+import { suggestDesign } from '@/lib/citations/design';
 import { lookupDoi, type DoiLookup } from '@/lib/citations/doi';
 import { formatFromFilename, splitSource, type ParsedEntry, type SourceFormat } from '@/lib/citations/parse';
 import { uniqueOrConflict, writeTransaction } from '@/lib/reviews/transaction';
@@ -13,9 +14,15 @@ import { newStudyRow, studiesDTO } from './studies';
 
 /**
  * Bringing references into a team's library from pasted text or an uploaded file: parse
- * (citation-js, offline), look DOIs up, drop what the library already has, and add the rest in
- * one transaction. Every entry gets its own result — added, duplicate (with the study it
- * matched) or failed (with why) — and a failed entry never leaves half a study behind.
+ * (citation-js, offline), look DOIs up, drop what the library already has, and add the rest.
+ * Every entry gets its own result — added, duplicate (with the study it matched) or failed (with
+ * why) — and a failed entry never leaves half a study behind.
+ *
+ * Built to cost little beside the parse itself (bench/import.ts measures both): the library's
+ * DOIs and fingerprints are read once and duplicates found in memory, and the new studies are
+ * written in chunks, one transaction and one multi-row insert per chunk, so the database work
+ * grows with the number of chunks rather than of entries and a long import never holds the
+ * write lock for long (docs/architecture.md, "Import").
  */
 
 /** Largest import in one request; a 2,000-entry library is the case we measure (bench/import.ts). */
@@ -23,9 +30,10 @@ export const MAX_IMPORT_ENTRIES = 5000;
 /** Largest .bib / .ris / .json upload. */
 export const MAX_IMPORT_BYTES = 10 * 1024 * 1024;
 const PARSE_BATCH = 100;
-const INSERT_BATCH = 250;
+/** Rows per insert and transaction: 500 × 22 columns stays under SQLite's 32,766 bound variables. */
+const INSERT_BATCH = 500;
 const LOOKUP_CONCURRENCY = 4;
-/** SQLite allows 32,766 bound variables per statement; IN lists stay far below. */
+/** IN lists stay far below SQLite's bound-variable limit. */
 const QUERY_CHUNK = 500;
 
 export interface ImportProgress {
@@ -58,26 +66,27 @@ async function inChunks<T, R>(items: T[], size: number, run: (chunk: T[]) => Pro
   return out;
 }
 
-async function existingBy(
-  teamId: number,
-  column: 'doi' | 'fingerprint',
-  values: string[],
-  transaction?: Transaction,
-): Promise<Map<string, Study>> {
-  const unique = [...new Set(values)];
-  const found = await inChunks(unique, QUERY_CHUNK, (chunk) =>
-    Study.findAll({
-      where: { teamId, [column]: { [Op.in]: chunk } },
-      attributes: ['id', 'doi', 'fingerprint', 'citation', 'title'],
-      transaction,
-    }),
-  );
-  const map = new Map<string, Study>();
-  for (const study of found) {
-    const key = study[column];
-    if (key && !map.has(key)) map.set(key, study);
+/** What a duplicate check needs of a library study. */
+type Known = Pick<Study, 'id' | 'doi' | 'fingerprint' | 'citation' | 'title'>;
+
+/**
+ * The team's library by DOI and by fingerprint, read in one query of five columns: a library of
+ * ten thousand studies is a few hundred kilobytes, and every entry is then checked in memory.
+ */
+async function libraryKeys(teamId: number): Promise<{ byDoi: Map<string, Known>; byFingerprint: Map<string, Known> }> {
+  const rows = await Study.findAll({
+    where: { teamId },
+    attributes: ['id', 'doi', 'fingerprint', 'citation', 'title'],
+    order: [['id', 'ASC']],
+    raw: true,
+  });
+  const byDoi = new Map<string, Known>();
+  const byFingerprint = new Map<string, Known>();
+  for (const row of rows as unknown as Known[]) {
+    if (row.doi && !byDoi.has(row.doi)) byDoi.set(row.doi, row);
+    if (!byFingerprint.has(row.fingerprint)) byFingerprint.set(row.fingerprint, row);
   }
-  return map;
+  return { byDoi, byFingerprint };
 }
 
 export async function importSource(
@@ -106,143 +115,136 @@ export async function importSource(
   }
 
   const results: (ImportResultDTO | null)[] = new Array(total).fill(null);
-  const matched = new Map<number, Study>();
+  const matched = new Set<number>();
+  const library = await libraryKeys(teamId);
+  const duplicateOf = (index: number, study: Known): ImportResultDTO => {
+    matched.add(study.id);
+    return {
+      index,
+      title: study.title,
+      status: 'duplicate',
+      studyId: study.id,
+      reason: `Already in the library as ${study.citation}.`,
+    };
+  };
 
   // 2. DOIs: one already in the library needs no lookup; the others are looked up a few at a time.
-  const doiEntries = entries.filter((e): e is Extract<ParsedEntry, { kind: 'doi' }> => e.kind === 'doi');
-  if (doiEntries.length) {
-    const known = await existingBy(
-      teamId,
-      'doi',
-      doiEntries.map((e) => e.doi),
-    );
-    const pending: Extract<ParsedEntry, { kind: 'doi' }>[] = [];
-    for (const entry of doiEntries) {
-      const study = known.get(entry.doi);
-      if (study) {
-        results[entry.index] = {
-          index: entry.index,
-          title: study.title,
-          status: 'duplicate',
-          studyId: study.id,
-          reason: `Already in the library as ${study.citation}.`,
-        };
-        matched.set(study.id, study);
-      } else pending.push(entry);
-    }
-    let looked = 0;
-    let next = 0;
-    const worker = async () => {
-      while (next < pending.length) {
-        const entry = pending[next++];
-        const answer = await lookup(entry.doi);
-        // Entries sit at their index (splitSource keeps the order).
-        entries[entry.index] = answer.ok
-          ? { kind: 'parsed', index: entry.index, csl: answer.csl }
-          : { kind: 'failed', index: entry.index, title: entry.doi, reason: answer.reason };
-        looked += 1;
-        progress({ phase: 'looking-up', done: looked, total: pending.length });
-      }
-    };
-    await Promise.all(Array.from({ length: Math.min(LOOKUP_CONCURRENCY, pending.length) }, worker));
+  const pending: Extract<ParsedEntry, { kind: 'doi' }>[] = [];
+  for (const entry of entries) {
+    if (entry.kind !== 'doi') continue;
+    const study = library.byDoi.get(entry.doi);
+    if (study) results[entry.index] = duplicateOf(entry.index, study);
+    else pending.push(entry);
   }
+  let looked = 0;
+  let next = 0;
+  const worker = async () => {
+    while (next < pending.length) {
+      const entry = pending[next++];
+      const answer = await lookup(entry.doi);
+      // Entries sit at their index (splitSource keeps the order).
+      entries[entry.index] = answer.ok
+        ? { kind: 'parsed', index: entry.index, csl: answer.csl }
+        : { kind: 'failed', index: entry.index, title: entry.doi, reason: answer.reason };
+      looked += 1;
+      progress({ phase: 'looking-up', done: looked, total: pending.length });
+    }
+  };
+  await Promise.all(Array.from({ length: Math.min(LOOKUP_CONCURRENCY, pending.length) }, worker));
 
   for (const entry of entries) {
     if (entry.kind === 'failed')
       results[entry.index] = { index: entry.index, title: entry.title, status: 'failed', reason: entry.reason };
   }
 
-  // 3. What the library already has, and repeats within this import.
-  const parsed = entries
-    .filter((e): e is Extract<ParsedEntry, { kind: 'parsed' }> => e.kind === 'parsed')
-    .map((e) => ({ index: e.index, csl: e.csl as CslItem, columns: referenceColumns(e.csl) }));
-  const byDoi = await existingBy(
-    teamId,
-    'doi',
-    parsed.flatMap((p) => (p.columns.doi ? [p.columns.doi] : [])),
-  );
-  const byFingerprint = await existingBy(
-    teamId,
-    'fingerprint',
-    parsed.filter((p) => !p.columns.doi).map((p) => p.columns.fingerprint),
-  );
+  // 3. What the library already has, and repeats within this import, found in memory.
   const firstInImport = new Map<string, number>();
   const repeats: { index: number; title: string; firstIndex: number }[] = [];
-  const toAdd: typeof parsed = [];
-  for (const p of parsed) {
-    const key = p.columns.doi ? `doi:${p.columns.doi}` : `fp:${p.columns.fingerprint}`;
-    const existing = p.columns.doi ? byDoi.get(p.columns.doi) : byFingerprint.get(p.columns.fingerprint);
-    if (existing) {
-      results[p.index] = {
-        index: p.index,
-        title: p.columns.title,
-        status: 'duplicate',
-        studyId: existing.id,
-        reason: `Already in the library as ${existing.citation}.`,
-      };
-      matched.set(existing.id, existing);
-    } else if (firstInImport.has(key)) {
-      repeats.push({ index: p.index, title: p.columns.title, firstIndex: firstInImport.get(key)! });
-    } else {
-      firstInImport.set(key, p.index);
-      toAdd.push(p);
+  const toAdd: { index: number; csl: CslItem; columns: ReturnType<typeof referenceColumns> }[] = [];
+  for (const entry of entries) {
+    if (entry.kind !== 'parsed') continue;
+    const columns = referenceColumns(entry.csl);
+    const key = columns.doi ? `doi:${columns.doi}` : `fp:${columns.fingerprint}`;
+    const existing = columns.doi ? library.byDoi.get(columns.doi) : library.byFingerprint.get(columns.fingerprint);
+    if (existing && !results[entry.index]) results[entry.index] = duplicateOf(entry.index, existing);
+    else if (firstInImport.has(key))
+      repeats.push({ index: entry.index, title: columns.title, firstIndex: firstInImport.get(key)! });
+    else {
+      firstInImport.set(key, entry.index);
+      toAdd.push({ index: entry.index, csl: entry.csl, columns });
     }
   }
 
-  // 4. Add the new ones, all or none (a failure here is a server fault, never a half import).
+  // 4. Add the new ones, a chunk per transaction: a chunk is saved whole or not at all.
   const added = new Map<number, Study>();
-  if (toAdd.length) {
-    await uniqueOrConflict(
-      'Another import added some of these studies at the same moment; import again to see which are new.',
-      () =>
-        writeTransaction(async (transaction) => {
-          for (let i = 0; i < toAdd.length; i += INSERT_BATCH) {
-            const batch = toAdd.slice(i, i + INSERT_BATCH);
+  for (let i = 0; i < toAdd.length; i += INSERT_BATCH) {
+    const batch = toAdd.slice(i, i + INSERT_BATCH);
+    try {
+      await uniqueOrConflict(
+        'Another import added some of these studies at the same moment; import again to see which are new.',
+        () =>
+          writeTransaction(async (transaction) => {
             const rows = await Study.bulkCreate(
-              batch.map((p) => newStudyRow(teamId, userId, p.csl, options.meta ?? {})),
-              { transaction },
+              batch.map((p) => newStudyRow(teamId, userId, p.csl, options.meta ?? {}, p.columns)),
+              { transaction, hooks: false, validate: false },
             );
             rows.forEach((row, j) => added.set(batch[j].index, row));
-            progress({ phase: 'saving', done: Math.min(i + INSERT_BATCH, toAdd.length), total: toAdd.length });
-            await yieldToEventLoop();
-          }
-          await recordEvent(
-            {
-              teamId,
-              actorId: userId,
-              action: 'studies.imported',
-              subjectType: 'study',
-              data: { format: split.format, entries: total, added: toAdd.length },
-            },
-            transaction,
-          );
-        }),
-    );
+          }),
+      );
+    } catch (error) {
+      // A unique-index clash (a concurrent import) fails this chunk alone; anything else is a server fault.
+      if (!(error instanceof AppError)) throw error;
+      for (const p of batch)
+        results[p.index] = { index: p.index, title: p.columns.title, status: 'failed', reason: error.message };
+    }
+    progress({ phase: 'saving', done: Math.min(i + INSERT_BATCH, toAdd.length), total: toAdd.length });
+    await yieldToEventLoop();
   }
+  if (added.size)
+    await recordEvent({
+      teamId,
+      actorId: userId,
+      action: 'studies.imported',
+      subjectType: 'study',
+      data: { format: split.format, entries: total, added: added.size },
+    });
   for (const [index, study] of added)
-    results[index] = { index, title: study.title, status: 'added', studyId: study.id };
+    results[index] = { index, title: study.title, status: 'added', studyId: study.id, ...suggestion(study) };
   for (const r of repeats) {
-    const first = added.get(r.firstIndex)!;
-    results[r.index] = {
-      index: r.index,
-      title: r.title,
-      status: 'duplicate',
-      studyId: first.id,
-      reason: `Appears earlier in this import (entry ${r.firstIndex + 1}).`,
-    };
+    const first = added.get(r.firstIndex);
+    results[r.index] = first
+      ? {
+          index: r.index,
+          title: r.title,
+          status: 'duplicate',
+          studyId: first.id,
+          reason: `Appears earlier in this import (entry ${r.firstIndex + 1}).`,
+        }
+      : { index: r.index, title: r.title, status: 'failed', reason: results[r.firstIndex]?.reason ?? 'Not saved.' };
   }
   progress({ phase: 'done', done: total, total });
 
   // The matches were loaded with a few columns only; the response sends them whole.
-  const matchedRows = await inChunks([...matched.keys()], QUERY_CHUNK, (chunk) =>
+  const matchedRows = await inChunks([...matched], QUERY_CHUNK, (chunk) =>
     Study.findAll({ where: { id: { [Op.in]: chunk } } }),
   );
+  const suggested = new Map(matchedRows.map((row) => [row.id, suggestion(row)]));
   const studies = await studiesDTO([...added.values(), ...matchedRows]);
   return {
-    results: results.map((r, index) => r ?? { index, title: null, status: 'failed', reason: 'Not processed.' }),
+    results: results.map((r, index) =>
+      r
+        ? { ...r, ...(r.status === 'duplicate' && r.studyId ? suggested.get(r.studyId) : {}) }
+        : { index, title: null, status: 'failed', reason: 'Not processed.' },
+    ),
     studies,
     format: split.format,
   };
+}
+
+/** The design a study's title or keywords name, while it has none (the coach confirms it). */
+function suggestion(study: Study): Pick<ImportResultDTO, 'suggestedDesign'> {
+  const design = study.design ? null : suggestDesign(study.csl);
+  return design ? { suggestedDesign: design } : {};
 }
 
 /** POST /api/studies/import: the uploaded file's text, its format from the file name. */

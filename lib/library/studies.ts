@@ -138,12 +138,18 @@ export async function findDuplicate(
 }
 
 /** Builds the row for a new study (not saved). */
-export function newStudyRow(teamId: number, userId: number | null, csl: CslItem, meta: StudyMetaInput) {
+export function newStudyRow(
+  teamId: number,
+  userId: number | null,
+  csl: CslItem,
+  meta: StudyMetaInput,
+  columns = referenceColumns(csl),
+) {
   return {
     teamId,
     createdById: userId,
     csl,
-    ...referenceColumns(csl),
+    ...columns,
     design: null,
     population: null,
     injured: false,

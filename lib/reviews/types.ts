@@ -126,6 +126,8 @@ export interface StudyDTO {
   year: number | null;
   journal: string | null;
   design: StudyDesign | null;
+  /** The design the title or keywords name (lib/citations/design.ts), while no design is set; the coach confirms it. */
+  suggestedDesign: StudyDesign | null;
   population: TrainingStatus | null;
   injured: boolean;
   n: number | null;
@@ -194,6 +196,8 @@ export interface ImportResultDTO {
   status: 'added' | 'duplicate' | 'failed';
   studyId?: number;
   reason?: string;
+  /** For an added or matched study with no design yet: the design its title or keywords name. */
+  suggestedDesign?: StudyDesign;
 }
 
 // ---------------------------------------------------------------------------------------------

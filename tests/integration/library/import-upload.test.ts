@@ -9,8 +9,7 @@ import { makeTeam, sendForm, snapshot, useDoiFakeAndStorage, type TeamFixture } 
 useTestApp();
 useDoiFakeAndStorage();
 let t: TeamFixture;
-const bytes = (name: string) =>
-  new Uint8Array(readFileSync(path.resolve(__dirname, '../../../fixtures/citations', name)));
+const bytes = (name: string) => new Uint8Array(readFileSync(path.resolve('fixtures/citations', name)));
 
 beforeAll(async () => {
   t = await makeTeam('im');
@@ -127,5 +126,56 @@ describe('POST /api/studies/import — a .bib, .ris or .json file', () => {
     expect(result.results.filter((r: { status: string }) => r.status === 'added')).toHaveLength(2000);
     expect(lines.filter((l) => l.type === 'progress').length).toBeGreaterThan(3);
     expect(await Study.count({ where: { teamId: t.teamId, doi: '10.5555/gen.1999' } })).toBe(1);
+  });
+});
+
+describe('POST /api/studies/import — a real-world-shaped .bib file', () => {
+  it('stores plain-text titles, journals and names, names the broken entry by its line, and suggests designs', async () => {
+    const team = await makeTeam('rw');
+    const res = await sendForm(team.coach, importRoute.POST, {
+      fields: { teamId: String(team.teamId) },
+      file: { name: 'real-world.bib', type: 'application/x-bibtex', bytes: bytes('real-world.bib') },
+    });
+    expect(res.status).toBe(201);
+    const results = res.body.results as {
+      status: string;
+      reason?: string;
+      suggestedDesign?: string;
+      studyId?: number;
+    }[];
+    expect(results.filter((r) => r.status === 'added')).toHaveLength(15);
+    expect(results[14]).toMatchObject({
+      status: 'failed',
+      reason: expect.stringMatching(/^Could not read the BibTeX entry at line 129/),
+    });
+    // The design a title names is offered, not set.
+    expect(results[2]).toMatchObject({ status: 'added', suggestedDesign: 'randomized' });
+    expect(results[1].suggestedDesign).toBeUndefined();
+    const rows = await Study.findAll({ where: { teamId: team.teamId }, order: [['id', 'ASC']] });
+    expect(rows.every((s) => s.design === null)).toBe(true);
+    // What the library sorts, searches and shows is plain Unicode: no TeX, no braces, no parser markup.
+    for (const s of rows) expect(JSON.stringify([s.title, s.journal, s.citation])).not.toMatch(/[{}<>]|\\[A-Za-z]/);
+    const holt = rows.find((s) => s.citation === 'Holt & Hollowridge Coaching Panel, 2022')!;
+    expect(holt.title).toBe('The TeX of training logs and the LaTeX athlete: Typesetting “Load” — a narrative');
+    expect(holt.journal).toBe('Training & Recovery');
+    expect(rows.find((s) => s.citation === 'Müller et al., 2021')).toBeDefined();
+    // The library list carries the suggestion too, until a design is confirmed.
+    const listed = res.body.studies.find((s: { id: number }) => s.id === results[2].studyId);
+    expect(listed.suggestedDesign).toBe('randomized');
+  });
+
+  it('answers a second import of the same file with duplicates and adds nothing', async () => {
+    const team = await makeTeam('rw2');
+    const send = () =>
+      sendForm(team.coach, importRoute.POST, {
+        fields: { teamId: String(team.teamId) },
+        file: { name: 'real-world.bib', type: 'application/x-bibtex', bytes: bytes('real-world.bib') },
+      });
+    await send();
+    const before = await Study.count({ where: { teamId: team.teamId } });
+    const again = await send();
+    expect(again.status).toBe(200);
+    expect(again.body.results.filter((r: { status: string }) => r.status === 'duplicate')).toHaveLength(15);
+    expect(await Study.count({ where: { teamId: team.teamId } })).toBe(before);
   });
 });

@@ -37,9 +37,12 @@ describe('POST /api/studies — pasted BibTeX, RIS, CSL-JSON or DOIs', () => {
       index: 4,
       title: 'This Entry Has No Comma after Its Key',
       status: 'failed',
-      reason: expect.stringMatching(/^Could not read this BibTeX entry/),
+      reason: 'Could not read the BibTeX entry at line 48: expected "comma", got "label" (line 49).',
     });
-    expect(res.body.results[5]).toMatchObject({ status: 'failed', reason: 'This BibTeX entry has no title.' });
+    expect(res.body.results[5]).toMatchObject({
+      status: 'failed',
+      reason: 'The BibTeX entry at line 54 has no title.',
+    });
     const holt = res.body.studies.find((s: { doi: string }) => s.doi === '10.5555/hjts.2024.0312');
     expect(holt).toMatchObject({
       citation: 'Holt & Wren, 2024',
@@ -102,6 +105,8 @@ describe('POST /api/studies — pasted BibTeX, RIS, CSL-JSON or DOIs', () => {
         title: 'Hangboard protocols and finger strength in youth climbers: A randomized trial',
         status: 'added',
         studyId: expect.any(Number),
+        // The title names the design, so it is offered for the coach to confirm.
+        suggestedDesign: 'randomized',
       },
       {
         index: 1,

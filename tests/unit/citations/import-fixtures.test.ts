@@ -37,8 +37,9 @@ describe('BibTeX fixture import', () => {
     const bad = failed(entries);
     expect(bad.map((e) => e.index)).toEqual([4, 5]);
     expect(bad[0].title).toBe('This Entry Has No Comma after Its Key');
-    expect(bad[0].reason).toMatch(/Could not read this BibTeX entry/);
-    expect(bad[1].reason).toBe('This BibTeX entry has no title.');
+    // The reason names the line the entry starts on and the line of the fault.
+    expect(bad[0].reason).toBe('Could not read the BibTeX entry at line 48: expected "comma", got "label" (line 49).');
+    expect(bad[1].reason).toBe('The BibTeX entry at line 54 has no title.');
   });
 
   it('maps fields to CSL-JSON: names, @string macro, accents, pages, lower-cased DOI, sentence-case title', () => {
@@ -87,7 +88,7 @@ describe('RIS and CSL-JSON fixture import', () => {
     expect(first.DOI).toBe('10.5555/hjts.2025.0245');
     expect(cslYear(first)).toBe(2025);
     expect(failed(entries)).toEqual([
-      { kind: 'failed', index: 2, title: null, reason: 'This RIS record has no title.' },
+      { kind: 'failed', index: 2, title: null, reason: 'The RIS record at line 25 has no title.' },
     ]);
   });
 
