@@ -1,12 +1,13 @@
 import path from 'node:path';
 import { Sequelize } from 'sequelize';
 import sqlite3 from 'sqlite3';
+import { env } from '@/lib/env';
 
 /** Where the SQLite file lives unless DATABASE_URL says otherwise. */
 export const DEFAULT_DATABASE_FILE = 'db/data/loadbearing.sqlite';
 
 /** Accepts `sqlite:path`, `file:path`, a plain path, or `:memory:`. */
-export function databaseFile(url = process.env.DATABASE_URL): string {
+export function databaseFile(url = env().DATABASE_URL): string {
   // turbopackIgnore: a runtime data path, not source; without it the build traces the whole project.
   if (!url) return path.resolve(/*turbopackIgnore: true*/ process.cwd(), DEFAULT_DATABASE_FILE);
   const stripped = url.replace(/^(sqlite|file):(\/\/)?/, '');

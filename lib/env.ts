@@ -13,6 +13,13 @@ const schema = z.object({
   SMTP_PORT: z.coerce.number().int().positive().default(2525),
   MAIL_FROM: z.string().default('Loadbearing <no-reply@loadbearing.test>'),
   MAIL_DROP_DIR: z.string().default('db/data/mail'),
+  SMTP_USER: z.string().optional(),
+  SMTP_PASSWORD: z.string().optional(),
+  // Unset: secure cookies exactly in production; 'false' serves a production build over plain http.
+  COOKIE_SECURE: z.enum(['true', 'false']).optional(),
+  DOI_BASE_URL: z.string().trim().optional(),
+  STORAGE_DIR: z.string().trim().optional(),
+  ALLOW_DEMO_SEED: z.string().optional(),
 });
 
 export type Env = z.infer<typeof schema>;

@@ -1,7 +1,10 @@
 'use client';
 
 import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
+import { DIRECTION_LABEL } from '@/components/review/labels';
 import { LocalTime } from '@/components/review/LocalTime';
+import type { Concern, Direction } from '@/lib/reviews/types';
+import { CONCERN_INFO, DOMAIN_INFO, DOWNGRADE_DOMAINS } from '@/lib/scoring/appraisal-vocabulary';
 import { Badge } from '@/components/ui/Badge';
 import { Button } from '@/components/ui/Button';
 import { Card, CardBody, CardHeader } from '@/components/ui/Card';
@@ -26,8 +29,6 @@ import { useAgreement } from './use-rounds';
 
 type SaveState = { kind: 'idle' | 'saving' | 'saved' | 'error'; at?: string; message?: string };
 
-const DIRECTION_WORD: Record<string, string> = { supports: 'supports', against: 'against', neutral: 'neutral' };
-const CONCERN_WORD: Record<string, string> = { none: 'no concern', serious: 'serious', 'very-serious': 'very serious' };
 const percent = (x: number | null) => (x === null ? null : `${Math.round(x * 100)} %`);
 
 /**
@@ -410,15 +411,15 @@ function EvidenceList({
     <ul className="space-y-2">
       {evidence.map((a) => {
         const s = studyById.get(a.studyId);
-        const concerns = (['riskOfBias', 'inconsistency', 'indirectness', 'imprecision', 'publicationBias'] as const)
-          .filter((d) => a[d] !== 'none')
-          .map((d) => `${d.replace(/([A-Z])/g, ' $1').toLowerCase()}: ${CONCERN_WORD[a[d]] ?? a[d]}`);
+        const concerns = DOWNGRADE_DOMAINS.filter((d) => a[d] !== 'none').map(
+          (d) => `${DOMAIN_INFO[d].label.toLowerCase()}: ${CONCERN_INFO[a[d] as Concern]?.label.toLowerCase() ?? a[d]}`,
+        );
         return (
           <li key={a.id} className="border-line rounded-md border px-3 py-2 text-sm">
             <p>
               <span className="font-semibold">{s?.citation ?? 'Unknown study'}</span>{' '}
               <Badge tone={a.direction === 'supports' ? 'success' : a.direction === 'against' ? 'danger' : 'neutral'}>
-                {DIRECTION_WORD[a.direction] ?? a.direction}
+                {DIRECTION_LABEL[a.direction as Direction]?.toLowerCase() ?? a.direction}
               </Badge>
             </p>
             {s && (

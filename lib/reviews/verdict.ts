@@ -1,6 +1,7 @@
 import { Op, type Transaction } from 'sequelize';
 import { Appraisal, Mechanism, Review, Study } from '@/models';
 import { scoreMechanism, scoreReview, type ReviewInput, type ReviewScore } from '@/lib/scoring';
+import type { DowngradeDomain } from '@/lib/scoring/appraisal-vocabulary';
 import { sessionSpacingOk, weeklyTimeUnderLoad } from '@/lib/training/dose';
 import { deriveAppraisal, type DerivedAppraisal, type StudyFacts } from './derive';
 import { convertLoad } from './protocol';
@@ -41,16 +42,11 @@ export interface MechanismFacts {
   minEffort: string | null;
   magnitude: string;
 }
-export interface AppraisalRowFacts {
+export interface AppraisalRowFacts extends Record<DowngradeDomain, string> {
   id: number;
   studyId: number;
   mechanismId: number | null;
   direction: string;
-  riskOfBias: string;
-  inconsistency: string;
-  indirectness: string;
-  imprecision: string;
-  publicationBias: string;
   largeEffect: number;
   doseResponse: boolean;
   confoundingWouldReduce: boolean;

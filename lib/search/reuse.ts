@@ -1,5 +1,6 @@
 import { badRequest, notFound } from '@/lib/api/errors';
 import { writeTransaction } from '@/lib/reviews/transaction';
+import { pickDomains } from '@/lib/scoring/appraisal-vocabulary';
 import { refreshVerdict } from '@/lib/reviews/verdict';
 import { Appraisal, Mechanism, Review } from '@/models';
 import { onReviewChanged } from './index-store';
@@ -50,11 +51,7 @@ export async function copyMechanism(
           studyId: a.studyId,
           mechanismId: copy.id,
           direction: a.direction,
-          riskOfBias: a.riskOfBias,
-          inconsistency: a.inconsistency,
-          indirectness: a.indirectness,
-          imprecision: a.imprecision,
-          publicationBias: a.publicationBias,
+          ...pickDomains(a),
           largeEffect: a.largeEffect,
           doseResponse: a.doseResponse,
           confoundingWouldReduce: a.confoundingWouldReduce,

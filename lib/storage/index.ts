@@ -1,4 +1,5 @@
 import path from 'node:path';
+import { env } from '@/lib/env';
 import type { Storage } from './keys';
 import { LocalDiskStorage } from './local-disk';
 
@@ -18,10 +19,7 @@ const globalForStorage = globalThis as unknown as { loadbearingStorage?: { dir: 
 /** The storage driver for this process: the local disk under STORAGE_DIR (default db/data/uploads). */
 export function storage(): Storage {
   // turbopackIgnore: a runtime data path, not source; without it the build traces the whole project.
-  const dir = path.resolve(
-    /*turbopackIgnore: true*/ process.cwd(),
-    process.env.STORAGE_DIR?.trim() || DEFAULT_STORAGE_DIR,
-  );
+  const dir = path.resolve(/*turbopackIgnore: true*/ process.cwd(), env().STORAGE_DIR || DEFAULT_STORAGE_DIR);
   const cached = globalForStorage.loadbearingStorage;
   if (cached && cached.dir === dir) return cached.driver;
   const driver = new LocalDiskStorage(dir);
