@@ -4,6 +4,7 @@ import type { Node as ProseMirrorNode } from '@tiptap/pm/model';
 import { EditorContent, ReactNodeViewRenderer, useEditor, type Editor } from '@tiptap/react';
 import StarterKit from '@tiptap/starter-kit';
 import { useEffect, useMemo, useRef, useState } from 'react';
+import dynamic from 'next/dynamic';
 import { useSWRConfig } from 'swr';
 import { Button } from '@/components/ui/Button';
 import { cn } from '@/components/ui/cn';
@@ -13,7 +14,6 @@ import type { ReviewDTO, StudyDTO } from '@/lib/reviews/types';
 import { apiFetch, errorMessage } from '@/lib/swr/fetcher';
 import { isReviewKey } from '@/lib/swr/keys';
 import { toEditorContent } from './body';
-import { CitationPicker } from './CitationPicker';
 import { CitationView } from './CitationView';
 import { ConflictBanner, KeptCopy } from './ConflictBanner';
 import { EditorToolbar } from './EditorToolbar';
@@ -23,6 +23,9 @@ import { MechanismBlockView } from './MechanismBlockView';
 import { PROSE } from './prose';
 import type { ReviewSaver } from './review-saver';
 import { useAutosave, type SaveStatus } from './use-autosave';
+
+// The citation dialog brings the study search (fuse.js); it is fetched the first time it opens.
+const CitationPicker = dynamic(() => import('./CitationPicker').then((m) => m.CitationPicker), { ssr: false });
 
 function statusText(status: SaveStatus): string {
   switch (status.kind) {
@@ -133,6 +136,9 @@ export function ReviewEditor({
   }, [live, workbench]);
 
   const [pickerOpen, setPickerOpen] = useState(false);
+  // Mounted from its first opening on, so later openings are instant and closing keeps its state.
+  const [pickerUsed, setPickerUsed] = useState(false);
+  if (pickerOpen && !pickerUsed) setPickerUsed(true);
   const [contentError, setContentError] = useState<string | null>(null);
   const [resolving, setResolving] = useState(false);
   const [kept, setKept] = useState<{ html: string; text: string; copied: boolean | null } | null>(null);
@@ -321,14 +327,16 @@ export function ReviewEditor({
         </div>
       )}
 
-      <CitationPicker
-        open={pickerOpen}
-        studies={library}
-        loading={libraryLoading}
-        error={libraryError}
-        onPick={insertCitation}
-        onClose={() => setPickerOpen(false)}
-      />
+      {pickerUsed && (
+        <CitationPicker
+          open={pickerOpen}
+          studies={library}
+          loading={libraryLoading}
+          error={libraryError}
+          onPick={insertCitation}
+          onClose={() => setPickerOpen(false)}
+        />
+      )}
     </section>
   );
 }
