@@ -29,7 +29,9 @@ export class Appraisal extends Model<InferAttributes<Appraisal>, InferCreationAt
 // eslint-disable-next-line @typescript-eslint/no-empty-object-type, @typescript-eslint/no-unsafe-declaration-merging
 export interface Appraisal extends Record<DowngradeDomain, CreationOptional<string>> {}
 
-const concern = { type: DataTypes.STRING(16), allowNull: false, defaultValue: 'none' };
+// A fresh definition per column: Sequelize writes each column's name into the object it is given,
+// so one object shared by the five domains mapped all of them onto the first column.
+const concern = () => ({ type: DataTypes.STRING(16), allowNull: false, defaultValue: 'none' });
 
 Appraisal.init(
   {
@@ -38,7 +40,7 @@ Appraisal.init(
     studyId: { type: DataTypes.INTEGER, allowNull: false },
     mechanismId: { type: DataTypes.INTEGER, allowNull: true },
     direction: { type: DataTypes.STRING(16), allowNull: false },
-    ...perDomain(() => concern),
+    ...perDomain(concern),
     largeEffect: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
     doseResponse: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
     confoundingWouldReduce: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },

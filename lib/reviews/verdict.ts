@@ -253,19 +253,20 @@ export async function reviewVerdict(reviewId: number): Promise<VerdictDTO | null
 /**
  * Recomputes and stores the cached verdict key. `touch` also moves the review's updatedAt (a
  * change to the review's own mechanisms or appraisals); a change to a shared study does not.
+ * Returns the scoring, whose per-appraisal grading a write answers with (graded once a write).
  */
 export async function refreshVerdict(
   reviewId: number,
   options: { transaction?: Transaction; touch?: boolean } = {},
-): Promise<VerdictKey | null> {
+): Promise<ScoredReview | null> {
   const data = await loadReviewData(reviewId, options.transaction);
   if (!data) return null;
-  const verdict = scoreReviewData(data).score.verdict;
+  const scored = scoreReviewData(data);
   await Review.update(
-    { verdict },
+    { verdict: scored.score.verdict },
     { where: { id: reviewId }, transaction: options.transaction, silent: !options.touch },
   );
-  return verdict;
+  return scored;
 }
 
 /** After a study changed: every review that appraises it. */
