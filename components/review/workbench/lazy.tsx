@@ -46,3 +46,20 @@ export const SimilarReviews = dynamic(
   // It shows nothing until a few words match, so nothing holds its place meanwhile.
   { ssr: false, loading: () => null },
 );
+
+// Below the mechanisms on every screen size, so never part of the first view: the dose check,
+// the recommendations (with their form) and publishing come after the page is interactive.
+export const DoseCheckPanel = dynamic(() => import('../DoseCheckPanel').then((m) => m.DoseCheckPanel), {
+  ssr: false,
+  loading: () => <Skeleton className="h-48 w-full" />,
+});
+
+export const RecommendationsPanel = dynamic(
+  () => import('../RecommendationsPanel').then((m) => m.RecommendationsPanel),
+  { ssr: false, loading: () => <Skeleton className="h-72 w-full" /> },
+);
+
+export const PublishPanel = dynamic(() => import('@/components/publishing/PublishPanel').then((m) => m.PublishPanel), {
+  ssr: false,
+  loading: () => <Skeleton className="h-32 w-full" />,
+});
