@@ -2,7 +2,6 @@
 
 import type { Node as ProseMirrorNode } from '@tiptap/pm/model';
 import { EditorContent, ReactNodeViewRenderer, useEditor, type Editor } from '@tiptap/react';
-import StarterKit from '@tiptap/starter-kit';
 import { useEffect, useMemo, useRef, useState } from 'react';
 import dynamic from 'next/dynamic';
 import { useSWRConfig } from 'swr';
@@ -15,9 +14,9 @@ import { apiFetch, errorMessage } from '@/lib/swr/fetcher';
 import { isReviewKey } from '@/lib/swr/keys';
 import { toEditorContent } from './body';
 import { CitationView } from './CitationView';
-import { ConflictBanner, KeptCopy } from './ConflictBanner';
 import { EditorToolbar } from './EditorToolbar';
 import { Citation } from './extensions/citation';
+import { basicExtensions } from './extensions/kit';
 import { MechanismBlock } from './extensions/mechanism-block';
 import { MechanismBlockView } from './MechanismBlockView';
 import { PROSE } from './prose';
@@ -25,6 +24,9 @@ import type { ReviewSaver } from './review-saver';
 import { useAutosave, type SaveStatus } from './use-autosave';
 
 // The citation dialog brings the study search (fuse.js); it is fetched the first time it opens.
+// Shown only after a conflicting save.
+const ConflictBanner = dynamic(() => import('./ConflictBanner').then((m) => m.ConflictBanner), { ssr: false });
+const KeptCopy = dynamic(() => import('./ConflictBanner').then((m) => m.KeptCopy), { ssr: false });
 const CitationPicker = dynamic(() => import('./CitationPicker').then((m) => m.CitationPicker), { ssr: false });
 
 function statusText(status: SaveStatus): string {
@@ -85,16 +87,7 @@ function liveWorkbench(): LiveWorkbench {
  */
 function buildExtensions(live: LiveWorkbench) {
   return [
-    StarterKit.configure({
-      heading: { levels: [2, 3] },
-      // Links need a URL dialog we do not have yet; pasted links stay plain text for now.
-      link: false,
-      codeBlock: false,
-      // It appends an empty paragraph to a document that ends in a block, which would count as
-      // an edit the moment a review opens and save a new version nobody wrote. The gap cursor
-      // (arrow keys past the last block) lets the coach type after a final block instead.
-      trailingNode: false,
-    }),
+    ...basicExtensions(),
     MechanismBlock.extend({ addNodeView: () => ReactNodeViewRenderer(MechanismBlockView) }).configure({
       onOpen: (id) => live.get()?.openMechanism(id),
       describe: (id) => live.get()?.mechanisms.get(id)?.name,

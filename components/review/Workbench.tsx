@@ -16,7 +16,7 @@ import { useReviewMutations } from '@/lib/swr/use-review-mutations';
 import { useVerdict } from '@/lib/swr/use-verdict';
 import { useWorkbench } from '@/lib/swr/use-workbench';
 import { RoundStatusBadge } from '@/components/rounds/RoundStatusBadge';
-import { useReviewFrozen } from '@/components/rounds/use-rounds';
+import { useReviewFrozen } from '@/lib/swr/use-rounds';
 import { ReviewHeader } from './ReviewHeader';
 import type { ViewerProps } from './viewer';
 import { AppraisalDialog, type AppraisalDialogState } from './workbench/AppraisalDialog';
