@@ -6,9 +6,7 @@
  *
  * An App Router page loads the framework's root chunks (build-manifest.json `rootMainFiles`)
  * plus every chunk its segments' client components need (the page's client-reference manifest,
- * `entryJSFiles`: root layout, group layout, boundaries, page). A Pages Router page loads its
- * own list from build-manifest.json `pages` (with `/_app` unless it ships no JavaScript, as the
- * verdict page does, see pages/v/[slug]/index.tsx). Chunks loaded later (next/dynamic, a
+ * `entryJSFiles`: root layout, group layout, boundaries, page). Chunks loaded later (next/dynamic, a
  * dialog opened, a panel scrolled to) are not counted: that is the point of loading them later.
  * Sizes are gzip at level 9 of each file, summed, as a server with static compression sends them.
  */
@@ -61,7 +59,7 @@ function entryFiles(route: string): string[] {
   return Object.values(manifest?.entryJSFiles ?? {}).flat();
 }
 
-const build = readJson<{ rootMainFiles: string[]; pages: Record<string, string[]> }>('build-manifest.json');
+const build = readJson<{ rootMainFiles: string[] }>('build-manifest.json');
 const rows: { page: string; kb: number; files: number }[] = [];
 const total = (files: Iterable<string>) => {
   const unique = [...new Set([...files].filter((f) => f.endsWith('.js')))];
@@ -71,9 +69,8 @@ const total = (files: Iterable<string>) => {
 for (const [page, route] of Object.entries(APP_PAGES)) {
   rows.push({ page, ...total([...build.rootMainFiles, ...entryFiles(route)]) });
 }
-// The athlete's verdict page sends no JavaScript at all (unstable_runtimeJS: false): its HTML
-// names no script, so its first load is 0 whatever the manifest lists for hydration.
-rows.push({ page: '/v/[slug] (public, no runtime JS)', kb: 0, files: 0 });
+// The athlete's verdict page (Pages Router, unstable_runtimeJS: false) is measured from the
+// scripts its served HTML names, by bench/verdict-page.ts.
 
 if (process.argv.includes('--json')) {
   console.log(JSON.stringify(rows, null, 2));
