@@ -12,6 +12,7 @@ import { useWorkbenchContext, type WorkbenchContextValue } from '@/components/re
 import type { ReviewDTO, StudyDTO } from '@/lib/reviews/types';
 import { apiFetch, errorMessage } from '@/lib/swr/fetcher';
 import { isReviewKey } from '@/lib/swr/keys';
+import { ReviewBody } from '@/components/rounds/ReviewBody';
 import { toEditorContent } from './body';
 import { CitationView } from './CitationView';
 import { EditorToolbar } from './EditorToolbar';
@@ -315,8 +316,15 @@ export function ReviewEditor({
       {editor ? (
         <EditorContent editor={editor} className={PROSE} />
       ) : (
-        <div className="text-ink-muted min-h-72 px-5 py-4" aria-busy="true">
-          Loading the editor…
+        // Until the editor exists (it is created after hydration), the same text as plain elements:
+        // the page keeps its height and readers can start reading, instead of a blank box that
+        // pushes everything below it down when the editor appears.
+        <div aria-busy="true">
+          <ReviewBody
+            body={review.body}
+            mechanismName={(id) => workbench.mechanisms.get(id)?.name}
+            citation={(id) => workbench.studies.get(id)?.citation}
+          />
         </div>
       )}
 
