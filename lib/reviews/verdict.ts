@@ -14,7 +14,6 @@ import type {
   StudyDesign,
   TrainingStatus,
   VerdictDTO,
-  VerdictKey,
 } from './types';
 
 /**
