@@ -1,6 +1,7 @@
 import { SequelizeStorage, Umzug } from 'umzug';
 import type { QueryInterface, Sequelize } from 'sequelize';
 import { withMigrationLock } from './migration-lock';
+import { env, isProduction } from '../lib/env';
 import { migrations } from './migrations';
 import { seeders } from './seeders';
 
@@ -32,7 +33,7 @@ export async function pendingMigrations(sequelize: Sequelize): Promise<string[]>
  * duplicates the demo team). Refuses in production: the demo password is public.
  */
 export async function seed(sequelize: Sequelize): Promise<string[]> {
-  if (process.env.NODE_ENV === 'production' && process.env.ALLOW_DEMO_SEED !== '1') {
+  if (isProduction() && env().ALLOW_DEMO_SEED !== '1') {
     throw new Error('Refusing to seed demo data in production (set ALLOW_DEMO_SEED=1 for a demo host).');
   }
   const umzug = new Umzug<Sequelize>({

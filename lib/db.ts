@@ -2,6 +2,7 @@ import path from 'node:path';
 import { Sequelize } from 'sequelize';
 import sqlite3 from 'sqlite3';
 import { serialiseWrites } from './sqlite-writer';
+import { env } from '@/lib/env';
 
 /** Where the SQLite file lives unless DATABASE_URL says otherwise. */
 export const DEFAULT_DATABASE_FILE = 'db/data/loadbearing.sqlite';
@@ -10,14 +11,14 @@ export const DEFAULT_DATABASE_FILE = 'db/data/loadbearing.sqlite';
 export type Dialect = 'sqlite' | 'postgres';
 
 /** `postgres://…` or `postgresql://…` selects PostgreSQL; anything else (a SQLite path or URL) keeps SQLite. */
-export function databaseDialect(url = process.env.DATABASE_URL): Dialect {
+export function databaseDialect(url = env().DATABASE_URL): Dialect {
   return url && /^postgres(ql)?:\/\//i.test(url) ? 'postgres' : 'sqlite';
 }
 
 export const isPostgres = () => databaseDialect() === 'postgres';
 
 /** Accepts `sqlite:path`, `file:path`, a plain path, or `:memory:`. */
-export function databaseFile(url = process.env.DATABASE_URL): string {
+export function databaseFile(url = env().DATABASE_URL): string {
   // turbopackIgnore: a runtime data path, not source; without it the build traces the whole project.
   if (!url) return path.resolve(/*turbopackIgnore: true*/ process.cwd(), DEFAULT_DATABASE_FILE);
   const stripped = url.replace(/^(sqlite|file):(\/\/)?/, '');
@@ -25,7 +26,7 @@ export function databaseFile(url = process.env.DATABASE_URL): string {
 }
 
 /** What to print about the database in logs: the SQLite file, or the PostgreSQL URL without its password. */
-export function databaseLabel(url = process.env.DATABASE_URL): string {
+export function databaseLabel(url = env().DATABASE_URL): string {
   if (databaseDialect(url) === 'sqlite') return databaseFile(url);
   const parsed = new URL(url!);
   parsed.password = parsed.password ? '***' : '';
@@ -73,7 +74,7 @@ function openPostgres(url: string): Sequelize {
     dialect: 'postgres',
     logging: false,
     define: { underscored: false },
-    pool: { max: Number(process.env.PG_POOL_MAX ?? 10), min: 0, idle: 10_000, acquire: 30_000 },
+    pool: { max: env().PG_POOL_MAX, min: 0, idle: 10_000, acquire: 30_000 },
   });
 }
 
@@ -82,7 +83,7 @@ const globalForDb = globalThis as unknown as { loadbearingDb?: Sequelize };
 /** The one Sequelize connection of the process (kept on globalThis so hot reloads reuse it). */
 export function db(): Sequelize {
   if (!globalForDb.loadbearingDb) {
-    const url = process.env.DATABASE_URL;
+    const url = env().DATABASE_URL;
     globalForDb.loadbearingDb = databaseDialect(url) === 'postgres' ? openPostgres(url!) : serialiseWrites(openSqlite());
   }
   return globalForDb.loadbearingDb;

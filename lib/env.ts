@@ -35,6 +35,13 @@ const schema = z.object({
   CROSSREF_BASE_URL: z.string().url().default('https://api.crossref.org'),
   CROSSREF_MAILTO: z.string().email().optional(),
   CROSSREF_FAKE_PORT: z.coerce.number().int().positive().default(2581),
+  SMTP_USER: z.string().optional(),
+  SMTP_PASSWORD: z.string().optional(),
+  // Unset: secure cookies exactly in production; 'false' serves a production build over plain http.
+  COOKIE_SECURE: z.enum(['true', 'false']).optional(),
+  DOI_BASE_URL: z.string().trim().optional(),
+  STORAGE_DIR: z.string().trim().optional(),
+  ALLOW_DEMO_SEED: z.string().optional(),
 });
 
 export type Env = z.infer<typeof schema>;

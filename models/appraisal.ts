@@ -1,5 +1,6 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes } from 'sequelize';
 import { db } from '@/lib/db';
+import { perDomain, type DowngradeDomain } from '@/lib/scoring/appraisal-vocabulary';
 
 /**
  * One study appraised against one mechanism of a review, or against the claimed outcome itself
@@ -7,17 +8,13 @@ import { db } from '@/lib/db';
  * applicability are not stored: the scoring engine derives them on every read, so a change to a
  * study's design or population shows up everywhere at once.
  */
+// eslint-disable-next-line @typescript-eslint/no-unsafe-declaration-merging -- the domain columns, below
 export class Appraisal extends Model<InferAttributes<Appraisal>, InferCreationAttributes<Appraisal>> {
   declare id: CreationOptional<number>;
   declare reviewId: number;
   declare studyId: number;
   declare mechanismId: number | null;
   declare direction: string;
-  declare riskOfBias: CreationOptional<string>;
-  declare inconsistency: CreationOptional<string>;
-  declare indirectness: CreationOptional<string>;
-  declare imprecision: CreationOptional<string>;
-  declare publicationBias: CreationOptional<string>;
   declare largeEffect: CreationOptional<number>;
   declare doseResponse: CreationOptional<boolean>;
   declare confoundingWouldReduce: CreationOptional<boolean>;
@@ -32,10 +29,12 @@ export class Appraisal extends Model<InferAttributes<Appraisal>, InferCreationAt
   declare updatedAt: CreationOptional<Date>;
 }
 
-/**
- * A fresh definition per attribute: Sequelize writes the column name into the object it is
- * given, so one object shared by five attributes maps all five onto the last one's column.
- */
+// The domain columns (one per downgrade domain of the scoring model's vocabulary), declared here.
+// eslint-disable-next-line @typescript-eslint/no-empty-object-type, @typescript-eslint/no-unsafe-declaration-merging
+export interface Appraisal extends Record<DowngradeDomain, CreationOptional<string>> {}
+
+// A fresh definition per column: Sequelize writes each column's name into the object it is given,
+// so one object shared by the five domains mapped all of them onto the first column.
 const concern = () => ({ type: DataTypes.STRING(16), allowNull: false, defaultValue: 'none' });
 
 Appraisal.init(
@@ -45,11 +44,7 @@ Appraisal.init(
     studyId: { type: DataTypes.INTEGER, allowNull: false },
     mechanismId: { type: DataTypes.INTEGER, allowNull: true },
     direction: { type: DataTypes.STRING(16), allowNull: false },
-    riskOfBias: concern(),
-    inconsistency: concern(),
-    indirectness: concern(),
-    imprecision: concern(),
-    publicationBias: concern(),
+    ...perDomain(concern),
     largeEffect: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
     doseResponse: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
     confoundingWouldReduce: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },

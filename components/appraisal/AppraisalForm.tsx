@@ -9,13 +9,7 @@ import { FormMessage } from '@/components/ui/FormMessage';
 import { StudyCombobox } from '@/components/library/StudyCombobox';
 import { issuesToErrors } from '@/components/ui/form-errors';
 import { useDialogForm } from '@/components/review/useDialogForm';
-import {
-  CONCERN_LABEL,
-  DESIGN_LABEL,
-  DIRECTION_LABEL,
-  percent,
-  TRAINING_STATUS_LABEL,
-} from '@/components/review/labels';
+import { DESIGN_LABEL, DIRECTION_LABEL, percent, TRAINING_STATUS_LABEL } from '@/components/review/labels';
 import {
   CONCERNS,
   DIRECTIONS,
@@ -27,55 +21,43 @@ import {
   type StudyDTO,
 } from '@/lib/reviews/types';
 import { explainApplicability, type ApplicabilityExplanation } from '@/lib/scoring/applicability';
+import {
+  CONCERN_INFO,
+  DOMAIN_INFO,
+  DOWNGRADE_DOMAINS,
+  gradingFields,
+  LARGE_EFFECT_INFO,
+  LARGE_EFFECTS,
+  perDomain,
+  type GradingFields,
+  type LargeEffect,
+} from '@/lib/scoring/appraisal-vocabulary';
 import { gradeCertainty, type CertaintyResult } from '@/lib/scoring/certainty';
 import { errorMessage } from '@/lib/swr/fetcher';
-import type { AppraisalInput } from '@/lib/swr/use-review-mutations';
-import { appraisalSchema } from '@/lib/validation/appraisals';
+import { appraisalSchema, type AppraisalInput } from '@/lib/validation/appraisals';
 import { directionReasonIssue, suggestedDirectionFor } from '@/lib/reviews/direction-check';
 import { targetDesirable } from '@/lib/reviews/meta';
 import { CertaintyWorking } from './CertaintyWorking';
 import { DirectionSuggestion } from './DirectionSuggestion';
 import { NeedsCheckNotice } from './NeedsCheck';
 
-type Domain = 'riskOfBias' | 'inconsistency' | 'indirectness' | 'imprecision' | 'publicationBias';
-
-const DOMAINS: { key: Domain; label: string; help: string }[] = [
-  { key: 'riskOfBias', label: 'Risk of bias', help: 'Randomisation, blinding, drop-outs, selective reporting.' },
-  { key: 'inconsistency', label: 'Inconsistency', help: 'Results that disagree across groups or studies.' },
-  { key: 'indirectness', label: 'Indirectness', help: 'Different people, exercise, dose or outcome from the claim’s.' },
-  { key: 'imprecision', label: 'Imprecision', help: 'Few participants, wide confidence interval.' },
-  { key: 'publicationBias', label: 'Publication bias', help: 'Signs that null results went unpublished.' },
-];
-
-interface Draft {
+type Draft = GradingFields & {
   studyId: number | null;
   mechanismId: number | null;
   direction: Direction;
-  riskOfBias: Concern;
-  inconsistency: Concern;
-  indirectness: Concern;
-  imprecision: Concern;
-  publicationBias: Concern;
-  largeEffect: 0 | 1 | 2;
-  doseResponse: boolean;
-  confoundingWouldReduce: boolean;
   override: boolean;
   /** Percent as typed. */
   applicabilityOverride: string;
   overrideReason: string;
   directionReason: string;
   notes: string;
-}
+};
 
 const fromAppraisal = (a: AppraisalDTO | undefined, mechanismId: number | null): Draft => ({
   studyId: a?.studyId ?? null,
   mechanismId: a ? a.mechanismId : mechanismId,
   direction: a?.direction ?? 'supports',
-  riskOfBias: a?.riskOfBias ?? 'none',
-  inconsistency: a?.inconsistency ?? 'none',
-  indirectness: a?.indirectness ?? 'none',
-  imprecision: a?.imprecision ?? 'none',
-  publicationBias: a?.publicationBias ?? 'none',
+  ...perDomain((d) => a?.[d] ?? 'none'),
   largeEffect: a?.largeEffect ?? 0,
   doseResponse: a?.doseResponse ?? false,
   confoundingWouldReduce: a?.confoundingWouldReduce ?? false,
@@ -149,19 +131,7 @@ export function AppraisalForm({
   const certainty = useMemo(() => {
     if (!study?.design) return null;
     const design = study.design;
-    return attempt<CertaintyResult>(() =>
-      gradeCertainty({
-        design,
-        riskOfBias: draft.riskOfBias,
-        inconsistency: draft.inconsistency,
-        indirectness: draft.indirectness,
-        imprecision: draft.imprecision,
-        publicationBias: draft.publicationBias,
-        largeEffect: draft.largeEffect,
-        doseResponse: draft.doseResponse,
-        confoundingWouldReduce: draft.confoundingWouldReduce,
-      }),
-    );
+    return attempt<CertaintyResult>(() => gradeCertainty({ design, ...gradingFields(draft) }));
   }, [study, draft]);
 
   const applicability = useMemo(() => {
@@ -187,14 +157,7 @@ export function AppraisalForm({
       studyId: draft.studyId ?? 0,
       mechanismId: draft.mechanismId,
       direction: draft.direction,
-      riskOfBias: draft.riskOfBias,
-      inconsistency: draft.inconsistency,
-      indirectness: draft.indirectness,
-      imprecision: draft.imprecision,
-      publicationBias: draft.publicationBias,
-      largeEffect: draft.largeEffect,
-      doseResponse: draft.doseResponse,
-      confoundingWouldReduce: draft.confoundingWouldReduce,
+      ...gradingFields(draft),
       applicabilityOverride: draft.override ? overrideNumber / 100 : null,
       overrideReason: draft.override ? draft.overrideReason : null,
       directionReason: needsReason ? draft.directionReason : null,
@@ -295,16 +258,16 @@ export function AppraisalForm({
       <div className="grid gap-6 lg:grid-cols-2">
         <fieldset className="space-y-4">
           <legend className="text-base font-semibold">Certainty: reasons to rate down</legend>
-          {DOMAINS.map((d) => (
+          {DOWNGRADE_DOMAINS.map((d) => (
             <SelectField
-              key={d.key}
-              label={d.label}
-              name={d.key}
-              help={d.help}
-              value={draft[d.key]}
-              onChange={(e) => set(d.key, e.target.value as Concern)}
-              options={CONCERNS.map((c) => ({ value: c, label: CONCERN_LABEL[c] }))}
-              errors={errors[d.key]}
+              key={d}
+              label={DOMAIN_INFO[d].label}
+              name={d}
+              help={DOMAIN_INFO[d].help}
+              value={draft[d]}
+              onChange={(e) => set(d, e.target.value as Concern)}
+              options={CONCERNS.map((c) => ({ value: c, label: CONCERN_INFO[c].label }))}
+              errors={errors[d]}
             />
           ))}
           <p className="pt-1 text-base font-semibold">Reasons to rate up</p>
@@ -315,12 +278,8 @@ export function AppraisalForm({
             label="Large effect"
             name="largeEffect"
             value={String(draft.largeEffect)}
-            onChange={(e) => set('largeEffect', Number(e.target.value) as 0 | 1 | 2)}
-            options={[
-              { value: '0', label: 'No' },
-              { value: '1', label: 'Large: risk ratio above 2 or below 0.5 (+1)' },
-              { value: '2', label: 'Very large: above 5 or below 0.2 (+2)' },
-            ]}
+            onChange={(e) => set('largeEffect', Number(e.target.value) as LargeEffect)}
+            options={LARGE_EFFECTS.map((n) => ({ value: String(n), label: LARGE_EFFECT_INFO[n].label }))}
             errors={errors.largeEffect}
           />
           <CheckboxField

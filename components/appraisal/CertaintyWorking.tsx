@@ -1,19 +1,7 @@
 import { cn } from '@/components/ui/cn';
 import { CERTAINTY_LABEL } from '@/components/review/labels';
+import { CERTAINTY_STEP_LABEL } from '@/lib/scoring/appraisal-vocabulary';
 import type { CertaintyResult } from '@/lib/scoring/certainty';
-
-const DOMAIN_LABEL: Record<string, string> = {
-  design: 'Start',
-  riskOfBias: 'Risk of bias',
-  inconsistency: 'Inconsistency',
-  indirectness: 'Indirectness',
-  imprecision: 'Imprecision',
-  publicationBias: 'Publication bias',
-  largeEffect: 'Large effect',
-  doseResponse: 'Dose–response',
-  confoundingWouldReduce: 'Confounding',
-  clamp: 'Limit',
-};
 
 const signed = (n: number) => (n > 0 ? `+${n}` : n < 0 ? `−${Math.abs(n)}` : '0');
 
@@ -41,7 +29,7 @@ export function CertaintyWorking({ result }: { result: CertaintyResult }) {
         {result.steps.map((step, i) => (
           <li key={`${step.domain}-${i}`} className="flex gap-2">
             <span className="w-28 shrink-0 font-semibold">
-              {DOMAIN_LABEL[step.domain] ?? step.domain}{' '}
+              {CERTAINTY_STEP_LABEL[step.domain] ?? step.domain}{' '}
               <span className="text-ink-muted font-normal tabular-nums">
                 {step.domain === 'design' ? step.change : signed(step.change)}
               </span>

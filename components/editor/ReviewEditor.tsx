@@ -2,8 +2,8 @@
 
 import type { Node as ProseMirrorNode } from '@tiptap/pm/model';
 import { EditorContent, ReactNodeViewRenderer, useEditor, type Editor } from '@tiptap/react';
-import StarterKit from '@tiptap/starter-kit';
 import { useEffect, useMemo, useRef, useState } from 'react';
+import dynamic from 'next/dynamic';
 import { useSWRConfig } from 'swr';
 import { Button } from '@/components/ui/Button';
 import { cn } from '@/components/ui/cn';
@@ -12,17 +12,23 @@ import { useWorkbenchContext, type WorkbenchContextValue } from '@/components/re
 import type { ReviewDTO, StudyDTO } from '@/lib/reviews/types';
 import { apiFetch, errorMessage } from '@/lib/swr/fetcher';
 import { isReviewKey } from '@/lib/swr/keys';
+import { ReviewBody } from '@/components/rounds/ReviewBody';
 import { toEditorContent } from './body';
-import { CitationPicker } from './CitationPicker';
 import { CitationView } from './CitationView';
-import { ConflictBanner, KeptCopy } from './ConflictBanner';
 import { EditorToolbar } from './EditorToolbar';
 import { Citation } from './extensions/citation';
+import { basicExtensions } from './extensions/kit';
 import { MechanismBlock } from './extensions/mechanism-block';
 import { MechanismBlockView } from './MechanismBlockView';
 import { PROSE } from './prose';
 import type { ReviewSaver } from './review-saver';
 import { useAutosave, type SaveStatus } from './use-autosave';
+
+// The citation dialog brings the study search (fuse.js); it is fetched the first time it opens.
+// Shown only after a conflicting save.
+const ConflictBanner = dynamic(() => import('./ConflictBanner').then((m) => m.ConflictBanner), { ssr: false });
+const KeptCopy = dynamic(() => import('./ConflictBanner').then((m) => m.KeptCopy), { ssr: false });
+const CitationPicker = dynamic(() => import('./CitationPicker').then((m) => m.CitationPicker), { ssr: false });
 
 function statusText(status: SaveStatus): string {
   switch (status.kind) {
@@ -82,16 +88,7 @@ function liveWorkbench(): LiveWorkbench {
  */
 function buildExtensions(live: LiveWorkbench) {
   return [
-    StarterKit.configure({
-      heading: { levels: [2, 3] },
-      // Links need a URL dialog we do not have yet; pasted links stay plain text for now.
-      link: false,
-      codeBlock: false,
-      // It appends an empty paragraph to a document that ends in a block, which would count as
-      // an edit the moment a review opens and save a new version nobody wrote. The gap cursor
-      // (arrow keys past the last block) lets the coach type after a final block instead.
-      trailingNode: false,
-    }),
+    ...basicExtensions(),
     MechanismBlock.extend({ addNodeView: () => ReactNodeViewRenderer(MechanismBlockView) }).configure({
       onOpen: (id) => live.get()?.openMechanism(id),
       describe: (id) => live.get()?.mechanisms.get(id)?.name,
@@ -133,6 +130,9 @@ export function ReviewEditor({
   }, [live, workbench]);
 
   const [pickerOpen, setPickerOpen] = useState(false);
+  // Mounted from its first opening on, so later openings are instant and closing keeps its state.
+  const [pickerUsed, setPickerUsed] = useState(false);
+  if (pickerOpen && !pickerUsed) setPickerUsed(true);
   const [contentError, setContentError] = useState<string | null>(null);
   const [resolving, setResolving] = useState(false);
   const [kept, setKept] = useState<{ html: string; text: string; copied: boolean | null } | null>(null);
@@ -316,19 +316,28 @@ export function ReviewEditor({
       {editor ? (
         <EditorContent editor={editor} className={PROSE} />
       ) : (
-        <div className="text-ink-muted min-h-72 px-5 py-4" aria-busy="true">
-          Loading the editor…
+        // Until the editor exists (it is created after hydration), the same text as plain elements:
+        // the page keeps its height and readers can start reading, instead of a blank box that
+        // pushes everything below it down when the editor appears.
+        <div aria-busy="true">
+          <ReviewBody
+            body={review.body}
+            mechanismName={(id) => workbench.mechanisms.get(id)?.name}
+            citation={(id) => workbench.studies.get(id)?.citation}
+          />
         </div>
       )}
 
-      <CitationPicker
-        open={pickerOpen}
-        studies={library}
-        loading={libraryLoading}
-        error={libraryError}
-        onPick={insertCitation}
-        onClose={() => setPickerOpen(false)}
-      />
+      {pickerUsed && (
+        <CitationPicker
+          open={pickerOpen}
+          studies={library}
+          loading={libraryLoading}
+          error={libraryError}
+          onPick={insertCitation}
+          onClose={() => setPickerOpen(false)}
+        />
+      )}
     </section>
   );
 }

@@ -3,7 +3,7 @@
 import Link from 'next/link';
 import { notFound, useRouter } from 'next/navigation';
 import { useId, useMemo, useRef, useState } from 'react';
-import useSWR, { useSWRConfig } from 'swr';
+import { useSWRConfig } from 'swr';
 import { Badge } from '@/components/ui/Badge';
 import { Button, buttonClasses } from '@/components/ui/Button';
 import { Card, CardBody, CardHeader } from '@/components/ui/Card';
@@ -19,9 +19,10 @@ import {
 } from '@/components/review/labels';
 import { decide } from '@/lib/auth/policy';
 import type { ViewerProps } from '@/components/review/viewer';
-import type { CitationDTO, StudyDetailDTO, StudyDTO, StudyInUseDTO } from '@/lib/reviews/types';
-import { ApiError, apiFetch, errorMessage, fetcher } from '@/lib/swr/fetcher';
+import type { StudyDetailDTO, StudyDTO, StudyInUseDTO } from '@/lib/reviews/types';
+import { ApiError, apiFetch, errorMessage } from '@/lib/swr/fetcher';
 import { isStudiesKey, keys } from '@/lib/swr/keys';
+import { useCitation } from '@/lib/swr/use-citation';
 import { useStudy } from '@/lib/swr/use-study';
 import { MAX_PDF_MB, uploadErrorMessage, uploadPdf } from './pdf-upload';
 import { NoticeBanner } from './NoticeBadge';
@@ -62,7 +63,7 @@ export function StudyDetail({
   const router = useRouter();
   const { mutate: mutateAll } = useSWRConfig();
   const { data, error, mutate } = useStudy(studyId, fallback);
-  const apa = useSWR<CitationDTO, ApiError>(data ? keys.citation(studyId, 'apa') : null, fetcher);
+  const apa = useCitation(studyId, 'apa', Boolean(data));
   const [editing, setEditing] = useState(false);
   const [copied, setCopied] = useState<string | null>(null);
   const [upload, setUpload] = useState<{ fraction: number } | null>(null);

@@ -2,10 +2,11 @@
 
 import Link from 'next/link';
 import { useId, useState, type FormEvent } from 'react';
-import useSWR from 'swr';
 import { Button } from '@/components/ui/Button';
 import type { PublishResultDTO, Visibility } from '@/lib/publishing/types';
 import { ApiError, apiFetch, errorMessage } from '@/lib/swr/fetcher';
+import { keys } from '@/lib/swr/keys';
+import { usePublication } from '@/lib/swr/use-publication';
 
 interface PublicationState {
   publication: {
@@ -25,8 +26,8 @@ interface PublicationState {
  * status; its refusal is shown as it is worded.
  */
 export function PublishPanel({ reviewId }: { reviewId: number }) {
-  const key = `/api/reviews/${reviewId}/publish`;
-  const { data, mutate } = useSWR(key, (url: string) => apiFetch<PublicationState>(url));
+  const key = keys.publication(reviewId);
+  const { data, mutate } = usePublication<PublicationState>(reviewId);
   const pub = data?.publication ?? null;
   const [visibility, setVisibility] = useState<Visibility>('team');
   const [note, setNote] = useState('');

@@ -7,7 +7,6 @@ import { SafetyNotice } from '@/components/ui/SafetyNotice';
 import { Spinner } from '@/components/ui/Spinner';
 import type { RecommendationsDTO, ReviewDTO } from '@/lib/reviews/types';
 import { ApiError, errorMessage } from '@/lib/swr/fetcher';
-import { recommendationsSchema } from '@/lib/validation/reviews';
 import { TextAreaField } from '@/components/ui/Field';
 import { focusFirstInvalid, issuesToErrors } from '@/components/ui/form-errors';
 
@@ -52,6 +51,8 @@ export function RecommendationsPanel({
   const submit = async (event: FormEvent) => {
     event.preventDefault();
     const form = event.currentTarget as HTMLFormElement;
+    // The schema (and zod with it) is fetched on the first save, not with the page.
+    const { recommendationsSchema } = await import('@/lib/validation/reviews');
     const parsed = recommendationsSchema.safeParse(draft);
     if (!parsed.success) {
       setErrors(issuesToErrors(parsed.error.issues));

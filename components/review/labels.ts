@@ -5,7 +5,6 @@
  */
 import type {
   CertaintyLevel,
-  Concern,
   Direction,
   Effort,
   LoadUnit,
@@ -84,12 +83,6 @@ export const DIRECTION_LABEL: Record<Direction, string> = {
   supports: 'Supports',
   against: 'Against',
   neutral: 'Neutral',
-};
-
-export const CONCERN_LABEL: Record<Concern, string> = {
-  none: 'No concern',
-  serious: 'Serious (−1)',
-  'very-serious': 'Very serious (−2)',
 };
 
 export const CERTAINTY_LABEL: Record<CertaintyLevel, string> = {

@@ -6,7 +6,7 @@ import { Badge } from '@/components/ui/Badge';
 import { Button } from '@/components/ui/Button';
 import type { CommentDTO } from '@/lib/rounds/types';
 import { apiFetch, errorMessage } from '@/lib/swr/fetcher';
-import { useComments } from './use-rounds';
+import { useComments } from '@/lib/swr/use-rounds';
 
 /**
  * The round's discussion: threads anchored to a mechanism or to the whole review, one level of

@@ -2,7 +2,7 @@
 
 import Link from 'next/link';
 import { LocalTime } from '@/components/review/LocalTime';
-import { useRounds } from './use-rounds';
+import { useRounds } from '@/lib/swr/use-rounds';
 
 /**
  * For the workbench header: while a round is open, says so and links to where the reader acts

@@ -1,5 +1,6 @@
 'use client';
 
+import dynamic from 'next/dynamic';
 import { useState } from 'react';
 import { useSWRConfig } from 'swr';
 import { LocalTime } from '@/components/review/LocalTime';
@@ -8,11 +9,13 @@ import { LinkButton } from '@/components/ui/Button';
 import type { RoundDTO } from '@/lib/rounds/types';
 import { AgreementPanel } from './AgreementPanel';
 import { CloseRoundForm } from './CloseRoundForm';
-import { CommentThreads } from './CommentThreads';
 import { OpenRoundForm } from './OpenRoundForm';
 import { ResolutionForm } from './ResolutionForm';
 import { RoundAuditLog } from './RoundAuditLog';
-import { agreementKey, commentsKey, useAgreement, useRounds, type RoundList } from './use-rounds';
+import { agreementKey, commentsKey, useAgreement, useRounds, type RoundList } from '@/lib/swr/use-rounds';
+
+// The threads come last on the page and fetch their own data: their code comes after.
+const CommentThreads = dynamic(() => import('./CommentThreads').then((m) => m.CommentThreads), { ssr: false });
 
 /**
  * The author's and owner's view of a review's peer review: open a round, watch who has

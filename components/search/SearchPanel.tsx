@@ -2,12 +2,11 @@
 
 import Link from 'next/link';
 import { useDeferredValue, useId, useState } from 'react';
-import useSWR from 'swr';
 import { Badge } from '@/components/ui/Badge';
 import { EmptyState } from '@/components/ui/EmptyState';
 import { SelectField } from '@/components/ui/Field';
-import type { SearchResultDTO } from '@/lib/search/search';
-import { apiFetch, errorMessage } from '@/lib/swr/fetcher';
+import { errorMessage } from '@/lib/swr/fetcher';
+import { useSearch } from '@/lib/swr/use-search';
 import { Highlight } from './Highlight';
 
 const KIND_LABEL = { review: 'Review', mechanism: 'Mechanism', study: 'Study' } as const;
@@ -29,11 +28,7 @@ export function SearchPanel({ teams, tags }: { teams: { id: number; name: string
   const inputId = useId();
   const params = new URLSearchParams({ q: deferred, teamId });
   for (const [k, v] of Object.entries({ kind, status, verdict, tag })) if (v) params.set(k, v);
-  const { data, error, isLoading } = useSWR(
-    deferred ? `/api/search?${params}` : null,
-    (url: string) => apiFetch<{ results: SearchResultDTO[] }>(url),
-    { keepPreviousData: true },
-  );
+  const { data, error, isLoading } = useSearch(deferred ? params : null);
   const results = data?.results ?? [];
   return (
     <div className="space-y-6">

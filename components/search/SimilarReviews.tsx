@@ -2,13 +2,12 @@
 
 import Link from 'next/link';
 import { useActionState, useDeferredValue } from 'react';
-import useSWR from 'swr';
 import { copyMechanismAction } from '@/app/(app)/search/actions';
 import { Badge } from '@/components/ui/Badge';
 import { SubmitButton } from '@/components/ui/SubmitButton';
 import type { FormState } from '@/lib/auth/action';
-import type { SearchResultDTO } from '@/lib/search/search';
-import { apiFetch } from '@/lib/swr/fetcher';
+import { useSearch } from '@/lib/swr/use-search';
+import { useWorkbench } from '@/lib/swr/use-workbench';
 import { Highlight } from './Highlight';
 
 /**
@@ -26,13 +25,13 @@ export function SimilarReviews({
   targetReviewId?: number;
 }) {
   const q = useDeferredValue(claim.trim());
-  const key =
-    q.length >= 8 ? `/api/search?kind=review&limit=5&teamId=${teamId}&q=${encodeURIComponent(q.slice(0, 200))}` : null;
-  const { data } = useSWR(key, (url: string) => apiFetch<{ results: SearchResultDTO[] }>(url), {
-    keepPreviousData: true,
-  });
+  const params =
+    q.length >= 8
+      ? new URLSearchParams({ kind: 'review', limit: '5', teamId: String(teamId), q: q.slice(0, 200) })
+      : null;
+  const { data } = useSearch(params);
   const results = (data?.results ?? []).filter((r) => r.id !== targetReviewId && r.score < 0.6);
-  if (!key || !results.length) return null;
+  if (!params || !results.length) return null;
   return (
     <section aria-labelledby="similar-heading" className="border-line bg-paper-sunken rounded-lg border p-4">
       <h2 id="similar-heading" className="font-semibold">
@@ -61,9 +60,7 @@ export function SimilarReviews({
 
 function MechanismsToCopy({ sourceReviewId, targetReviewId }: { sourceReviewId: number; targetReviewId: number }) {
   // The workbench read of the past review (staff only, like this panel), for its mechanisms.
-  const { data } = useSWR(`/api/reviews/${sourceReviewId}`, (url: string) =>
-    apiFetch<{ mechanisms: { id: number; name: string }[] }>(url),
-  );
+  const { data } = useWorkbench(sourceReviewId);
   const mechanisms = data?.mechanisms ?? [];
   if (!mechanisms.length) return null;
   return (

@@ -2,13 +2,13 @@
 
 import Link from 'next/link';
 import { useDeferredValue, useId, useState } from 'react';
-import useSWR from 'swr';
 import { Badge } from '@/components/ui/Badge';
 import { EmptyState } from '@/components/ui/EmptyState';
 import { VerdictChip } from '@/components/verdict/VerdictChip';
 import { longDate } from '@/components/verdict-page/labels';
 import type { VerdictListItemDTO } from '@/lib/publishing/types';
-import { apiFetch, errorMessage } from '@/lib/swr/fetcher';
+import { errorMessage } from '@/lib/swr/fetcher';
+import { useVerdictSearch } from '@/lib/swr/use-search';
 import { Highlight } from './Highlight';
 
 /**
@@ -28,10 +28,7 @@ export function VerdictSearch({
   const [q, setQ] = useState('');
   const deferred = useDeferredValue(q.trim());
   const id = useId();
-  const key = deferred ? `/api/verdicts?q=${encodeURIComponent(deferred)}${teamId ? `&teamId=${teamId}` : ''}` : null;
-  const { data, error, isLoading } = useSWR(key, (url: string) => apiFetch<{ verdicts: VerdictListItemDTO[] }>(url), {
-    keepPreviousData: true,
-  });
+  const { data, error, isLoading } = useVerdictSearch(deferred, teamId);
   const items = deferred ? (data?.verdicts ?? []) : initial;
   return (
     <div className="space-y-4">

@@ -1,3 +1,5 @@
+import type { ConcernLevel, DowngradeDomain } from '../../lib/scoring/appraisal-vocabulary';
+
 /**
  * The demo's three claim reviews (PRODUCT.md, "Demo scenario"). Everything is invented: the
  * claims, the studies (./20261201-0002-demo-reviews.ts takes their references from
@@ -180,17 +182,11 @@ export type DemoMechanism = {
   desirable?: 'higher' | 'lower';
 };
 
-type Concern = 'none' | 'serious' | 'very-serious';
-export type DemoAppraisal = {
+export type DemoAppraisal = Partial<Record<DowngradeDomain, ConcernLevel>> & {
   doi: string;
   /** null: the claimed outcome. */
   mechanism: string | null;
   direction: 'supports' | 'against' | 'neutral';
-  riskOfBias?: Concern;
-  inconsistency?: Concern;
-  indirectness?: Concern;
-  imprecision?: Concern;
-  publicationBias?: Concern;
   doseResponse?: boolean;
   override?: { value: number; reason: string };
   /** Why the direction differs from the one the study's effect suggests. */

@@ -1,5 +1,6 @@
 import type { Sequelize } from 'sequelize';
 import { cleanCsl } from '../../lib/citations/csl';
+import { perDomain } from '../../lib/scoring/appraisal-vocabulary';
 import { SEEDED_REFERENCES } from '../../lib/citations/demo-records';
 import { referenceColumns } from '../../lib/library/columns';
 import {
@@ -164,11 +165,7 @@ async function insertReview(
       studyId: study.id,
       mechanismId,
       direction: a.direction,
-      riskOfBias: a.riskOfBias ?? 'none',
-      inconsistency: a.inconsistency ?? 'none',
-      indirectness: a.indirectness ?? 'none',
-      imprecision: a.imprecision ?? 'none',
-      publicationBias: a.publicationBias ?? 'none',
+      ...perDomain((d) => a[d] ?? 'none'),
       largeEffect: 0,
       doseResponse: a.doseResponse ?? false,
       confoundingWouldReduce: false,

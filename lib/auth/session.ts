@@ -1,4 +1,5 @@
 import type { SessionOptions } from 'iron-session';
+import { env } from '@/lib/env';
 
 export interface SessionData {
   userId?: number;
@@ -13,7 +14,7 @@ export const SESSION_COOKIE = 'loadbearing_session';
  * runner writes a random one into .env.local on first start; production must set it.
  */
 export function sessionOptions(): SessionOptions {
-  const password = process.env.SESSION_SECRET;
+  const { SESSION_SECRET: password, COOKIE_SECURE, NODE_ENV } = env();
   if (!password || password.length < 32) {
     throw new Error('SESSION_SECRET must be set to at least 32 characters.');
   }
@@ -25,7 +26,7 @@ export function sessionOptions(): SessionOptions {
       httpOnly: true,
       sameSite: 'lax',
       // COOKIE_SECURE=false only for a production build served over plain http on this machine (browser tests).
-      secure: process.env.COOKIE_SECURE ? process.env.COOKIE_SECURE === 'true' : process.env.NODE_ENV === 'production',
+      secure: COOKIE_SECURE ? COOKIE_SECURE === 'true' : NODE_ENV === 'production',
       path: '/',
     },
   };

@@ -8,6 +8,7 @@ import { plainCsl } from './rich-text';
  * The base URL comes from DOI_BASE_URL (default the public resolver https://doi.org), so tests
  * and `npm run dev` point it at the local fake in ./fake-doi-server.ts.
  */
+import { env } from '@/lib/env';
 
 export const DEFAULT_DOI_BASE_URL = 'https://doi.org';
 export const CSL_JSON_MEDIA_TYPE = 'application/vnd.citationstyles.csl+json';
@@ -56,7 +57,7 @@ export function doiUrl(doi: string, base = DEFAULT_DOI_BASE_URL): string {
 }
 
 export function doiBaseUrl(): string {
-  return process.env.DOI_BASE_URL?.trim() || DEFAULT_DOI_BASE_URL;
+  return env().DOI_BASE_URL || DEFAULT_DOI_BASE_URL;
 }
 
 export type DoiLookup = { ok: true; csl: Record<string, unknown> } | { ok: false; reason: string };

@@ -19,7 +19,7 @@ import { Follow, Membership, Publication, Team, User } from '@/models';
  */
 
 function secret(): string {
-  const value = process.env.SESSION_SECRET;
+  const value = env().SESSION_SECRET;
   if (!value || value.length < 32) throw new Error('SESSION_SECRET must be set to sign unsubscribe links.');
   return value;
 }

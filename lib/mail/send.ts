@@ -12,7 +12,7 @@ let transporter: Transporter | null = null;
 let transporterKey = '';
 
 function transport(): Transporter {
-  const { SMTP_HOST, SMTP_PORT } = env();
+  const { SMTP_HOST, SMTP_PORT, SMTP_USER, SMTP_PASSWORD } = env();
   const key = `${SMTP_HOST}:${SMTP_PORT}`;
   if (!transporter || key !== transporterKey) {
     // Plain SMTP to the configured relay; in development and tests that is the local fake.
@@ -21,7 +21,7 @@ function transport(): Transporter {
       port: SMTP_PORT,
       secure: false,
       ignoreTLS: SMTP_HOST === '127.0.0.1' || SMTP_HOST === 'localhost',
-      auth: process.env.SMTP_USER ? { user: process.env.SMTP_USER, pass: process.env.SMTP_PASSWORD ?? '' } : undefined,
+      auth: SMTP_USER ? { user: SMTP_USER, pass: SMTP_PASSWORD ?? '' } : undefined,
     });
     transporterKey = key;
   }

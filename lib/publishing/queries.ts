@@ -26,6 +26,8 @@ interface LoadedPublication {
   >;
   versions: Pick<PublishedVersion, 'number' | 'createdAt' | 'changeNote' | 'publishedById' | 'snapshot'>[];
   publisherNames: Map<number, string>;
+  /** Flags the evidence watch raised on the latest version (lib/watch/flags.ts). */
+  evidenceChanged: Awaited<ReturnType<typeof flagsOfVersion>>;
 }
 
 /**

@@ -251,7 +251,7 @@ async function assertNotAppraisedTwice(
   }
 }
 
-async function appraisalDTO(review: Review, appraisal: Appraisal, study: Study): Promise<AppraisalDTO> {
+function appraisalDTO(review: Review, appraisal: Appraisal, study: Study): AppraisalDTO {
   return toAppraisalDTO(appraisal, deriveAppraisal(appraisalFacts(appraisal), studyFacts(study), targetFacts(review)));
 }
 
@@ -271,16 +271,22 @@ async function checkDirectionReason(
   if (issue) throw badRequest(issue.message, [issue]);
 }
 
+/** The written appraisal as the verdict's refresh graded it, so a write grades it once. */
+async function refreshAndDescribe(review: Review, appraisal: Appraisal, transaction: Transaction): Promise<AppraisalDTO> {
+  const scored = await refreshVerdict(review.id, { transaction, touch: true });
+  const derived = scored?.derived.get(appraisal.id);
+  if (!derived) throw new Error(`Appraisal ${appraisal.id} was not graded with its review.`);
+  return toAppraisalDTO(appraisal, derived);
+}
+
 export async function createAppraisal(review: Review, input: AppraisalInput): Promise<AppraisalDTO> {
-  const { appraisal, study } = await writeTransaction(async (transaction) => {
+  return writeTransaction(async (transaction) => {
     const study = await checkReferences(review, input.studyId, input.mechanismId, transaction);
     await checkDirectionReason(review, study, input, transaction);
     await assertNotAppraisedTwice(review.id, input.studyId, input.mechanismId, transaction);
     const appraisal = await Appraisal.create({ ...input, reviewId: review.id }, { transaction });
-    await refreshVerdict(review.id, { transaction, touch: true });
-    return { appraisal, study };
+    return refreshAndDescribe(review, appraisal, transaction);
   });
-  return appraisalDTO(review, appraisal, study);
 }
 
 export async function updateAppraisal(
@@ -297,7 +303,7 @@ export async function updateAppraisal(
   if (issue) throw badRequest(issue.message, [issue]);
   const studyId = input.studyId ?? appraisal.studyId;
   const mechanismId = input.mechanismId !== undefined ? input.mechanismId : appraisal.mechanismId;
-  const study = await writeTransaction(async (transaction) => {
+  return writeTransaction(async (transaction) => {
     const study = await checkReferences(review, studyId, mechanismId, transaction);
     await assertNotAppraisedTwice(review.id, studyId, mechanismId, transaction, appraisal.id);
     await checkDirectionReason(
@@ -316,15 +322,13 @@ export async function updateAppraisal(
       { ...input, needsCheck: false, ...(merged.applicabilityOverride === null ? { overrideReason: null } : {}) },
       { transaction },
     );
-    await refreshVerdict(review.id, { transaction, touch: true });
-    return study;
+    return refreshAndDescribe(review, appraisal, transaction);
   });
-  return appraisalDTO(review, appraisal, study);
 }
 
 export async function deleteAppraisal(review: Review, appraisal: Appraisal): Promise<AppraisalDTO> {
   const study = await Study.findByPk(appraisal.studyId);
-  const dto = study ? await appraisalDTO(review, appraisal, study) : null;
+  const dto = study ? appraisalDTO(review, appraisal, study) : null;
   await writeTransaction(async (transaction) => {
     await appraisal.destroy({ transaction });
     await refreshVerdict(review.id, { transaction, touch: true });

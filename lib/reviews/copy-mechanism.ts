@@ -3,6 +3,7 @@ import { assertReviewEditable } from '@/lib/rounds/freeze';
 import { onReviewChanged } from '@/lib/search/index-store';
 import { writeTransaction } from './transaction';
 import { refreshVerdict } from './verdict';
+import { pickDomains } from '@/lib/scoring/appraisal-vocabulary';
 import { Appraisal, Mechanism, Review } from '@/models';
 
 /**
@@ -54,11 +55,7 @@ export async function copyMechanism(
           studyId: a.studyId,
           mechanismId: copy.id,
           direction: a.direction,
-          riskOfBias: a.riskOfBias,
-          inconsistency: a.inconsistency,
-          indirectness: a.indirectness,
-          imprecision: a.imprecision,
-          publicationBias: a.publicationBias,
+          ...pickDomains(a),
           largeEffect: a.largeEffect,
           doseResponse: a.doseResponse,
           confoundingWouldReduce: a.confoundingWouldReduce,

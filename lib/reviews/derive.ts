@@ -5,7 +5,8 @@ import {
   type ApplicabilityExplanation,
   type CertaintyResult,
 } from '@/lib/scoring';
-import type { Concern, Direction, StudyDesign, TrainingStatus } from './types';
+import { gradingFields, type GradingFields } from '@/lib/scoring/appraisal-vocabulary';
+import type { Direction, StudyDesign, TrainingStatus } from './types';
 
 /**
  * What the scoring engine derives for one appraisal — certainty from the study's design and the
@@ -27,18 +28,10 @@ export interface TargetFacts {
   intensity: number | null;
 }
 
-export interface AppraisalFacts {
+export type AppraisalFacts = GradingFields & {
   direction: Direction;
-  riskOfBias: Concern;
-  inconsistency: Concern;
-  indirectness: Concern;
-  imprecision: Concern;
-  publicationBias: Concern;
-  largeEffect: 0 | 1 | 2;
-  doseResponse: boolean;
-  confoundingWouldReduce: boolean;
   applicabilityOverride: number | null;
-}
+};
 
 export interface DerivedAppraisal {
   certainty: CertaintyResult;
@@ -58,14 +51,7 @@ const FALLBACK_DESIGN: StudyDesign = 'expert-opinion';
 export function deriveAppraisal(appraisal: AppraisalFacts, study: StudyFacts, target: TargetFacts): DerivedAppraisal {
   const certainty = gradeCertainty({
     design: study.design ?? FALLBACK_DESIGN,
-    riskOfBias: appraisal.riskOfBias,
-    inconsistency: appraisal.inconsistency,
-    indirectness: appraisal.indirectness,
-    imprecision: appraisal.imprecision,
-    publicationBias: appraisal.publicationBias,
-    largeEffect: appraisal.largeEffect,
-    doseResponse: appraisal.doseResponse,
-    confoundingWouldReduce: appraisal.confoundingWouldReduce,
+    ...gradingFields(appraisal),
   });
   if (study.design === null) {
     certainty.notes.unshift(

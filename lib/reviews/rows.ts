@@ -1,4 +1,5 @@
 import type { Appraisal, Mechanism, Review } from '@/models';
+import { pickDomains, type DowngradeDomain, type LargeEffect } from '@/lib/scoring/appraisal-vocabulary';
 import { protocolIntensity } from './protocol';
 import type {
   AppraisalDTO,
@@ -123,12 +124,8 @@ export function toMechanismDTO(m: Mechanism): MechanismDTO {
 export function appraisalFacts(a: AppraisalRowFacts): AppraisalFacts {
   return {
     direction: a.direction as Direction,
-    riskOfBias: a.riskOfBias as Concern,
-    inconsistency: a.inconsistency as Concern,
-    indirectness: a.indirectness as Concern,
-    imprecision: a.imprecision as Concern,
-    publicationBias: a.publicationBias as Concern,
-    largeEffect: a.largeEffect as 0 | 1 | 2,
+    ...(pickDomains(a) as Record<DowngradeDomain, Concern>),
+    largeEffect: a.largeEffect as LargeEffect,
     doseResponse: a.doseResponse,
     confoundingWouldReduce: a.confoundingWouldReduce,
     applicabilityOverride: a.applicabilityOverride,

@@ -9,6 +9,7 @@ import type { EvidenceNotice } from '@/lib/watch/notices';
 import type { Direction, Effort, Magnitude } from '@/lib/scoring/types';
 import type { CertaintyLevel, Concern, StudyDesign, TrainingStatus, VerdictKey } from '@/lib/scoring/types';
 import type { EffectCheckDTO } from './effect-check';
+import type { DowngradeDomain, LargeEffect } from '@/lib/scoring/appraisal-vocabulary';
 
 export const LOAD_UNITS = ['percent-max', 'percent-1rm', 'percent-mvc', 'percent-bodyweight', 'kg-added'] as const;
 export type LoadUnit = (typeof LOAD_UNITS)[number];
@@ -144,19 +145,14 @@ export interface StudyDTO {
   notice: EvidenceNotice | null;
 }
 
-export interface AppraisalDTO {
+export interface AppraisalDTO extends Record<DowngradeDomain, Concern> {
   id: number;
   reviewId: number;
   studyId: number;
   /** null: the appraisal tests the claimed outcome itself. */
   mechanismId: number | null;
   direction: Direction;
-  riskOfBias: Concern;
-  inconsistency: Concern;
-  indirectness: Concern;
-  imprecision: Concern;
-  publicationBias: Concern;
-  largeEffect: 0 | 1 | 2;
+  largeEffect: LargeEffect;
   doseResponse: boolean;
   confoundingWouldReduce: boolean;
   applicabilityOverride: number | null;

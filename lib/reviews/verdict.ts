@@ -1,6 +1,7 @@
 import { Op, type Transaction } from 'sequelize';
 import { Appraisal, Mechanism, Review, Study } from '@/models';
 import { scoreMechanism, scoreReview, type ReviewInput, type ReviewScore } from '@/lib/scoring';
+import type { DowngradeDomain } from '@/lib/scoring/appraisal-vocabulary';
 import { sessionSpacingOk, weeklyTimeUnderLoad } from '@/lib/training/dose';
 import { outcomeEffectCheck } from './effect-check';
 import { deriveAppraisal, type DerivedAppraisal, type StudyFacts } from './derive';
@@ -15,7 +16,6 @@ import type {
   StudyDesign,
   TrainingStatus,
   VerdictDTO,
-  VerdictKey,
 } from './types';
 
 /**
@@ -43,16 +43,11 @@ export interface MechanismFacts {
   minEffort: string | null;
   magnitude: string;
 }
-export interface AppraisalRowFacts {
+export interface AppraisalRowFacts extends Record<DowngradeDomain, string> {
   id: number;
   studyId: number;
   mechanismId: number | null;
   direction: string;
-  riskOfBias: string;
-  inconsistency: string;
-  indirectness: string;
-  imprecision: string;
-  publicationBias: string;
   largeEffect: number;
   doseResponse: boolean;
   confoundingWouldReduce: boolean;
@@ -277,19 +272,20 @@ export async function reviewVerdict(reviewId: number): Promise<VerdictDTO | null
 /**
  * Recomputes and stores the cached verdict key. `touch` also moves the review's updatedAt (a
  * change to the review's own mechanisms or appraisals); a change to a shared study does not.
+ * Returns the scoring, whose per-appraisal grading a write answers with (graded once a write).
  */
 export async function refreshVerdict(
   reviewId: number,
   options: { transaction?: Transaction; touch?: boolean } = {},
-): Promise<VerdictKey | null> {
+): Promise<ScoredReview | null> {
   const data = await loadReviewData(reviewId, options.transaction);
   if (!data) return null;
-  const verdict = scoreReviewData(data).score.verdict;
+  const scored = scoreReviewData(data);
   await Review.update(
-    { verdict },
+    { verdict: scored.score.verdict },
     { where: { id: reviewId }, transaction: options.transaction, silent: !options.touch },
   );
-  return verdict;
+  return scored;
 }
 
 /** After a study changed: every review that appraises it. */

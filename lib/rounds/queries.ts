@@ -3,6 +3,7 @@ import { notFound } from '@/lib/api/errors';
 import { decide, type Actor } from '@/lib/auth/policy';
 import { toProtocolDTO } from '@/lib/reviews/rows';
 import { loadReviewData, verdictFromData } from '@/lib/reviews/verdict';
+import { pickDomains } from '@/lib/scoring/appraisal-vocabulary';
 import { bodyReferences } from '@/lib/validation/reviews';
 import {
   AuditEvent,
@@ -237,11 +238,7 @@ export async function scorecardView(
     studyId: a.studyId,
     mechanismId: a.mechanismId,
     direction: a.direction,
-    riskOfBias: a.riskOfBias,
-    inconsistency: a.inconsistency,
-    indirectness: a.indirectness,
-    imprecision: a.imprecision,
-    publicationBias: a.publicationBias,
+    ...pickDomains(a),
     notes: a.notes,
     directionReason: a.directionReason ?? null,
   }));

@@ -1,4 +1,5 @@
 import type { ProtocolDTO } from '@/lib/reviews/types';
+import type { DowngradeDomain } from '@/lib/scoring/appraisal-vocabulary';
 
 /**
  * The shapes the peer-review routes send and the round pages read. Importable by client
@@ -103,16 +104,11 @@ export interface BlindStudyDTO {
 }
 
 /** An appraisal as entered by the author (direction and GRADE domains), without derived scores. */
-export interface BlindAppraisalDTO {
+export interface BlindAppraisalDTO extends Record<DowngradeDomain, string> {
   id: number;
   studyId: number;
   mechanismId: number | null;
   direction: string;
-  riskOfBias: string;
-  inconsistency: string;
-  indirectness: string;
-  imprecision: string;
-  publicationBias: string;
   notes: string;
   /** Why the direction differs from the one the study's effect suggests (docs/scoring.md §10). */
   directionReason: string | null;

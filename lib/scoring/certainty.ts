@@ -1,15 +1,20 @@
 import {
   CERTAINTY_LEVEL_BY_SCORE,
   CERTAINTY_SCORE_RANGE,
-  CONCERN_CHANGE,
-  CONCERN_LEVELS,
   DESIGN_START_SCORE,
-  DOWNGRADE_DOMAINS,
   FORCED_INDIRECT_DESIGNS,
   LARGE_EFFECT_RR,
   STUDY_DESIGNS,
   UPGRADE_MAX_START,
 } from './constants';
+import {
+  CERTAINTY_STEP_LABEL,
+  CONCERN_INFO,
+  CONCERN_LEVELS,
+  DOMAIN_INFO,
+  DOWNGRADE_DOMAINS,
+  type GradingFields,
+} from './appraisal-vocabulary';
 import { ScoringInputError } from './errors';
 import { optionalBoolean, requireFinite, requireObject, requireOneOf } from './validate';
 import type { CertaintyLevel, Concern, StudyDesign } from './types';
@@ -20,17 +25,8 @@ import type { CertaintyLevel, Concern, StudyDesign } from './types';
  * @example
  * const input: CertaintyInput = { design: 'cohort', largeEffect: 1, doseResponse: true };
  */
-export interface CertaintyInput {
+export interface CertaintyInput extends Partial<GradingFields> {
   design: StudyDesign;
-  riskOfBias?: Concern;
-  inconsistency?: Concern;
-  indirectness?: Concern;
-  imprecision?: Concern;
-  publicationBias?: Concern;
-  /** 0 none, 1 large (RR > 2 or < 0.5), 2 very large (RR > 5 or < 0.2). */
-  largeEffect?: 0 | 1 | 2;
-  doseResponse?: boolean;
-  confoundingWouldReduce?: boolean;
 }
 
 /**
@@ -40,8 +36,7 @@ export interface CertaintyInput {
  * @example
  * const domain: CertaintyDomain = 'imprecision';
  */
-export type CertaintyDomain =
-  'design' | (typeof DOWNGRADE_DOMAINS)[number] | 'largeEffect' | 'doseResponse' | 'confoundingWouldReduce' | 'clamp';
+export type CertaintyDomain = keyof typeof CERTAINTY_STEP_LABEL;
 
 /**
  * One line of the certainty working. For the first step (`design`) `change` is the starting
@@ -89,14 +84,6 @@ const DESIGN_WORDS: Record<StudyDesign, string> = {
   'in-vitro': 'An in-vitro study',
 };
 
-const DOMAIN_WORDS: Record<(typeof DOWNGRADE_DOMAINS)[number], string> = {
-  riskOfBias: 'risk of bias',
-  inconsistency: 'inconsistency',
-  indirectness: 'indirectness',
-  imprecision: 'imprecision',
-  publicationBias: 'publication bias',
-};
-
 const LEVEL_WORDS: Record<1 | 2 | 3 | 4, string> = {
   4: 'high',
   3: 'moderate',
@@ -142,11 +129,11 @@ export function gradeCertainty(input: CertaintyInput): CertaintyResult {
     const given: Concern = raw[domain] === undefined ? 'none' : requireOneOf(domain, raw[domain], CONCERN_LEVELS);
     const forced = domain === 'indirectness' && forcedIndirect && given !== 'very-serious';
     const concern: Concern = forced ? 'very-serious' : given;
-    const change = CONCERN_CHANGE[concern];
+    const change: number = CONCERN_INFO[concern].change;
     const reason = forced
       ? `${DESIGN_WORDS[design]} speaks to athletes only indirectly, so indirectness counts as ` +
         `very serious at least: down two levels.`
-      : `${concern === 'serious' ? 'Serious' : 'Very serious'} ${DOMAIN_WORDS[domain]} rates ` +
+      : `${concern === 'serious' ? 'Serious' : 'Very serious'} ${DOMAIN_INFO[domain].label.toLowerCase()} rates ` +
         `certainty down ${levelsText(change)}.`;
     if (change !== 0) {
       downgraded = true;

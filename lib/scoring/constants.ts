@@ -73,30 +73,9 @@ export const DESIGN_START_SCORE = {
  */
 export const FORCED_INDIRECT_DESIGNS = ['animal', 'in-vitro'] as const;
 
-/**
- * The five GRADE domains that can rate certainty down.
- * Source: GRADE Handbook (Schünemann et al., eds., 2013); Guyatt et al. 2011, J Clin Epidemiol 64
- * (the GRADE guidelines series).
- *
- * @example
- * DOWNGRADE_DOMAINS.length; // 5
- */
-export const DOWNGRADE_DOMAINS = [
-  'riskOfBias',
-  'inconsistency',
-  'indirectness',
-  'imprecision',
-  'publicationBias',
-] as const;
-
-/**
- * How far one domain's concern rates certainty down.
- * Source: GRADE Handbook (2013) — "serious" one level, "very serious" two.
- *
- * @example
- * CONCERN_CHANGE['very-serious']; // -2
- */
-export const CONCERN_CHANGE = { none: 0, serious: -1, 'very-serious': -2 } as const;
+// The downgrade domains, their concern levels and what each level changes live with their labels
+// in ./appraisal-vocabulary.ts, the one source of the appraisal's vocabulary.
+export { CONCERN_LEVELS, DOWNGRADE_DOMAINS } from './appraisal-vocabulary';
 
 /**
  * Upgrading applies only to evidence that starts at this score or lower.
@@ -152,14 +131,6 @@ export const CERTAINTY_LEVEL_BY_SCORE = {
  * CERTAINTY_LEVELS[0]; // 'very-low'
  */
 export const CERTAINTY_LEVELS = ['very-low', 'low', 'moderate', 'high'] as const;
-
-/**
- * Concern levels for a downgrade domain. Source: GRADE Handbook (2013).
- *
- * @example
- * CONCERN_LEVELS; // ['none', 'serious', 'very-serious']
- */
-export const CONCERN_LEVELS = ['none', 'serious', 'very-serious'] as const;
 
 // ---------------------------------------------------------------------------------------------
 // §2 Applicability

@@ -1,6 +1,6 @@
 import path from 'node:path';
-import type { Storage } from './keys';
 import { env } from '@/lib/env';
+import type { Storage } from './keys';
 import { LocalDiskStorage } from './local-disk';
 import { S3Storage } from './s3';
 
@@ -41,10 +41,7 @@ export function storage(): Storage {
     return driver;
   }
   // turbopackIgnore: a runtime data path, not source; without it the build traces the whole project.
-  const dir = path.resolve(
-    /*turbopackIgnore: true*/ process.cwd(),
-    process.env.STORAGE_DIR?.trim() || DEFAULT_STORAGE_DIR,
-  );
+  const dir = path.resolve(/*turbopackIgnore: true*/ process.cwd(), env().STORAGE_DIR || DEFAULT_STORAGE_DIR);
   const cached = globalForStorage.loadbearingStorage;
   if (cached && cached.dir === dir) return cached.driver;
   const driver = new LocalDiskStorage(dir);

@@ -29,6 +29,9 @@ export const keys = {
   citation: (studyId: number, format: 'apa' | 'bibtex' | 'ris' | 'csl') =>
     `/api/studies/${studyId}/citation${query({ format })}`,
   studyFile: (studyId: number) => `/api/studies/${studyId}/file`,
+  search: (params: URLSearchParams) => `/api/search?${params}`,
+  verdictSearch: (q: string, teamId?: number) => `/api/verdicts${query({ q, teamId })}`,
+  publication: (reviewId: number) => `/api/reviews/${reviewId}/publish`,
 };
 
 /** Every cached read that belongs to one review (workbench, verdict, meta-analyses). */

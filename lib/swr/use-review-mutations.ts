@@ -3,6 +3,7 @@
 import { useCallback, useMemo } from 'react';
 import { useSWRConfig } from 'swr';
 import type { AppraisalDTO, MechanismDTO, ReviewDTO } from '@/lib/reviews/types';
+import type { AppraisalInput } from '@/lib/validation/appraisals';
 import { apiFetch } from './fetcher';
 import { isReviewKey, isReviewListKey } from './keys';
 
@@ -10,26 +11,6 @@ import { isReviewKey, isReviewListKey } from './keys';
 export type MechanismInput = Pick<
   MechanismDTO,
   'name' | 'kind' | 'summary' | 'minIntensity' | 'minEffort' | 'prior' | 'magnitude' | 'stated' | 'desirable'
->;
-
-/** The appraisal fields a coach edits (POST and PATCH bodies); the derived ones are the server's. */
-export type AppraisalInput = Pick<
-  AppraisalDTO,
-  | 'studyId'
-  | 'mechanismId'
-  | 'direction'
-  | 'riskOfBias'
-  | 'inconsistency'
-  | 'indirectness'
-  | 'imprecision'
-  | 'publicationBias'
-  | 'largeEffect'
-  | 'doseResponse'
-  | 'confoundingWouldReduce'
-  | 'applicabilityOverride'
-  | 'overrideReason'
-  | 'directionReason'
-  | 'notes'
 >;
 
 /**

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { CONCERNS, DIRECTIONS } from '@/lib/reviews/types';
+import { LARGE_EFFECTS, perDomain } from '@/lib/scoring/appraisal-vocabulary';
 import { idParam } from './reviews';
 
 /**
@@ -18,12 +19,8 @@ export const appraisalFields = {
     .positive({ error: 'Pick a study from the library.' }),
   mechanismId: z.number({ error: 'Pick a mechanism, or null for the claimed outcome.' }).int().positive().nullable(),
   direction: z.enum(DIRECTIONS, { error: `Direction must be one of: ${DIRECTIONS.join(', ')}.` }),
-  riskOfBias: concern,
-  inconsistency: concern,
-  indirectness: concern,
-  imprecision: concern,
-  publicationBias: concern,
-  largeEffect: z.union([z.literal(0), z.literal(1), z.literal(2)], { error: 'Large effect is 0, 1 or 2.' }),
+  ...perDomain(() => concern),
+  largeEffect: z.literal(LARGE_EFFECTS, { error: `Large effect is ${LARGE_EFFECTS.join(', ')}.` }),
   doseResponse: z.boolean({ error: 'Dose–response must be true or false.' }),
   confoundingWouldReduce: z.boolean({ error: 'Must be true or false.' }),
   applicabilityOverride: z
@@ -56,11 +53,7 @@ export const appraisalSchema = z
     studyId: appraisalFields.studyId,
     mechanismId: appraisalFields.mechanismId.default(null),
     direction: appraisalFields.direction,
-    riskOfBias: concern.default('none'),
-    inconsistency: concern.default('none'),
-    indirectness: concern.default('none'),
-    imprecision: concern.default('none'),
-    publicationBias: concern.default('none'),
+    ...perDomain(() => concern.default('none')),
     largeEffect: appraisalFields.largeEffect.default(0),
     doseResponse: appraisalFields.doseResponse.default(false),
     confoundingWouldReduce: appraisalFields.confoundingWouldReduce.default(false),

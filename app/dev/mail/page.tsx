@@ -3,6 +3,7 @@ import { notFound } from 'next/navigation';
 import { connection } from 'next/server';
 import { Logo } from '@/components/layout/Logo';
 import { EmptyState } from '@/components/ui/EmptyState';
+import { isProduction } from '@/lib/env';
 import { readDropInbox } from '@/lib/mail/inbox';
 import { MailCard } from '../_components/MailCard';
 
@@ -10,7 +11,7 @@ export const metadata: Metadata = { title: 'Development mail', robots: { index: 
 
 // The local SMTP fake's inbox. Development only: in production this route does not exist.
 export default async function DevMailPage() {
-  if (process.env.NODE_ENV === 'production') notFound();
+  if (isProduction()) notFound();
   await connection();
   const mails = await readDropInbox();
   return (

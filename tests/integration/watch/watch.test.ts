@@ -15,6 +15,10 @@ import { DoiCheck } from '@/models/doi-check';
 import { EvidenceFlag } from '@/models/evidence-flag';
 import { Client, useTestApp } from '../../helpers/app';
 
+/** The actor of a fresh session of that user. */
+const actorOf = async (userId: number) =>
+  loadActor({ userId, generation: (await User.findByPk(userId))!.sessionGeneration });
+
 /**
  * The evidence watch against the local registry fake (lib/citations/fake-crossref-server.ts):
  * the demo seed's state, then from a clean slate a retraction, nothing new, a correction, the
@@ -270,7 +274,7 @@ describe('new evidence to consider', () => {
     expect(run.summary!.suggestions).toBe(1);
     expect(await Appraisal.count({ where: { reviewId: pub.reviewId } })).toBe(appraisalsBefore);
 
-    const offered = await suggestionsFor((await loadActor(author.id))!);
+    const offered = await suggestionsFor((await actorOf(author.id))!);
     expect(offered).toEqual([
       expect.objectContaining({
         slug: pub.slug,
@@ -279,7 +283,7 @@ describe('new evidence to consider', () => {
       }),
     ]);
     const owner = (await User.findOne({ where: { email: 'owner@granite-hollow.test' } }))!;
-    expect(await suggestionsFor((await loadActor(owner.id))!)).toEqual([]);
+    expect(await suggestionsFor((await actorOf(owner.id))!)).toEqual([]);
 
     const params = { id: String(offered[0].id) };
     const otherCoach = new Client('10.9.1.1');
@@ -288,7 +292,7 @@ describe('new evidence to consider', () => {
     const me = new Client('10.9.1.2');
     await me.call(signIn.POST, { json: { email: 'coach2@granite-hollow.test', password: 'loadbearing-demo' } });
     expect((await me.call(dismiss.POST, { method: 'POST', params })).status).toBe(200);
-    expect(await suggestionsFor((await loadActor(author.id))!)).toEqual([]);
+    expect(await suggestionsFor((await actorOf(author.id))!)).toEqual([]);
 
     // A later run does not offer it again.
     const again = await runWatch(teamId, { trigger: 'member', client: noWait });

@@ -1,4 +1,4 @@
-import { WorkbenchSkeleton } from '@/components/review/Workbench';
+import { WorkbenchSkeleton } from '@/components/review/workbench/WorkbenchSkeleton';
 
 export default function Loading() {
   return <WorkbenchSkeleton />;

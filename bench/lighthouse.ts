@@ -1,0 +1,199 @@
+/**
+ * Benchmark (not a test): Lighthouse (npm `lighthouse`, 12.x for Node 20) against the production
+ * build, with Debian's chromium. Two pages, as people use them:
+ *
+ * - the workbench /reviews/<id>, signed in as the demo coach, desktop preset — goal: performance
+ *   ≥ 90, accessibility 100;
+ * - the athlete's verdict page /v/<slug>, signed out, mobile preset (Lighthouse's default) —
+ *   goal: performance ≥ 95, accessibility 100.
+ *
+ *   npm run build && npx tsx bench/lighthouse.ts [--json]
+ *
+ * Uses a throwaway seeded SQLite file and `npm start`'s server (scripts/start.ts). Each page is
+ * run three times and the median performance score kept (Lighthouse's own advice: single runs
+ * vary). Every failed audit of a category below 100 is listed, so a regression says what broke.
+ */
+import { execFileSync, spawn } from 'node:child_process';
+import { createRequire } from 'node:module';
+import { mkdtempSync, rmSync } from 'node:fs';
+import { createServer } from 'node:net';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import * as chromeLauncher from 'chrome-launcher';
+import type { Result } from 'lighthouse';
+
+const RUNS = 3;
+const LIGHTHOUSE_CLI = createRequire(import.meta.url).resolve('lighthouse/cli/index.js');
+const CHROMIUM = '/usr/bin/chromium';
+const COACH = { email: 'coach@granite-hollow.test', password: 'loadbearing-demo' };
+const VERDICT_SLUG = 'cold-plunges-after-strength';
+
+function freePort(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const probe = createServer();
+    probe.once('error', reject);
+    probe.listen(0, '127.0.0.1', () => {
+      const a = probe.address();
+      const port = typeof a === 'object' && a ? a.port : 0;
+      probe.close(() => resolve(port));
+    });
+  });
+}
+
+const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
+
+interface PageScore {
+  page: string;
+  preset: 'desktop' | 'mobile';
+  performance: number;
+  accessibility: number;
+  runs: number[];
+  failing: string[];
+  metrics: Record<string, string>;
+}
+
+async function audit(
+  port: number,
+  url: string,
+  preset: 'desktop' | 'mobile',
+  cookie: string | undefined,
+): Promise<PageScore> {
+  const args = [
+    LIGHTHOUSE_CLI,
+    url,
+    `--port=${port}`,
+    '--output=json',
+    '--output-path=stdout',
+    '--quiet',
+    '--only-categories=performance,accessibility',
+    ...(preset === 'desktop' ? ['--preset=desktop'] : []),
+    ...(cookie ? [`--extra-headers=${JSON.stringify({ Cookie: cookie })}`] : []),
+  ];
+  const results: Result[] = [];
+  for (let i = 0; i < RUNS; i++) {
+    // The CLI in its own plain Node process: Lighthouse sends functions' source to the page, and
+    // this script's TypeScript loader would have rewritten them with helpers the page lacks.
+    const out = execFileSync(process.execPath, args, { maxBuffer: 64 * 1024 * 1024, encoding: 'utf8' });
+    const lhr = JSON.parse(out) as Result;
+    if (lhr.runtimeError) throw new Error(`${url}: ${lhr.runtimeError.message}`);
+    results.push(lhr);
+  }
+  const perf = results.map((r) => Math.round((r.categories.performance.score ?? 0) * 100));
+  const lhr = results.find((r) => Math.round((r.categories.performance.score ?? 0) * 100) === median(perf))!;
+  const failing: string[] = [];
+  for (const category of Object.values(lhr.categories)) {
+    for (const ref of category.auditRefs) {
+      const a = lhr.audits[ref.id];
+      if (ref.weight > 0 && a.score !== null && a.score < 1) {
+        failing.push(`${category.id}: ${a.id} (${Math.round(a.score * 100)}) ${a.displayValue ?? ''}`.trim());
+      }
+    }
+  }
+  const metric = (id: string) => lhr.audits[id]?.displayValue ?? '—';
+  return {
+    page: new URL(url).pathname,
+    preset,
+    performance: median(perf),
+    accessibility: Math.round((lhr.categories.accessibility.score ?? 0) * 100),
+    runs: perf,
+    failing,
+    metrics: {
+      FCP: metric('first-contentful-paint'),
+      LCP: metric('largest-contentful-paint'),
+      TBT: metric('total-blocking-time'),
+      CLS: metric('cumulative-layout-shift'),
+    },
+  };
+}
+
+async function main() {
+  const root = process.cwd();
+  const work = mkdtempSync(path.join(tmpdir(), 'loadbearing-bench-lh-'));
+  const databaseFile = path.join(work, 'bench.sqlite');
+  process.env.DATABASE_URL = databaseFile;
+  process.env.ALLOW_DEMO_SEED = '1';
+  const { db } = await import('../lib/db');
+  const { migrate, seed } = await import('../db/migrate');
+  await migrate(db());
+  await seed(db());
+  const [rows] = await db().query('SELECT id FROM reviews ORDER BY id LIMIT 1');
+  const reviewId = (rows as { id: number }[])[0]?.id ?? 1;
+  await db().close();
+
+  const port = await freePort();
+  const base = `http://127.0.0.1:${port}`;
+  const server = spawn(process.execPath, ['--import', 'tsx', path.join(root, 'scripts/start.ts')], {
+    cwd: root,
+    env: {
+      ...process.env,
+      NODE_ENV: 'production',
+      NEXT_TELEMETRY_DISABLED: '1',
+      PORT: String(port),
+      HOST: '127.0.0.1',
+      DATABASE_URL: databaseFile,
+      SESSION_SECRET: 'bench-secret-that-is-long-enough-for-iron-session-00',
+      COOKIE_SECURE: 'false',
+      APP_URL: base,
+      SMTP_PORT: '1',
+    },
+    stdio: ['ignore', 'ignore', 'inherit'],
+  });
+  const chrome = await chromeLauncher.launch({
+    chromePath: CHROMIUM,
+    chromeFlags: ['--headless', '--no-sandbox', '--disable-gpu', '--no-first-run', '--disable-background-networking'],
+  });
+  try {
+    for (let i = 0; i < 480; i++) {
+      try {
+        if ((await fetch(`${base}/`)).status < 500) break;
+      } catch {
+        // not up yet
+      }
+      await new Promise((r) => setTimeout(r, 250));
+    }
+    const signIn = await fetch(`${base}/api/auth/sign-in`, {
+      method: 'POST',
+      headers: { 'content-type': 'application/json', origin: base },
+      body: JSON.stringify(COACH),
+    });
+    if (signIn.status !== 200) throw new Error(`Signing in answered ${signIn.status}`);
+    const cookie = signIn.headers
+      .getSetCookie()
+      .map((c) => c.split(';')[0])
+      .join('; ');
+    // Warm the server's caches and compile paths once, so the first measured run is not an outlier.
+    await fetch(`${base}/reviews/${reviewId}`, { headers: { cookie } });
+    await fetch(`${base}/v/${VERDICT_SLUG}`);
+
+    const scores = [
+      await audit(chrome.port, `${base}/reviews/${reviewId}`, 'desktop', cookie),
+      await audit(chrome.port, `${base}/v/${VERDICT_SLUG}`, 'mobile', undefined),
+    ];
+    if (process.argv.includes('--json')) {
+      console.log(JSON.stringify(scores, null, 2));
+      return;
+    }
+    for (const s of scores) {
+      const goal = s.preset === 'desktop' ? 90 : 95;
+      console.log(
+        `${s.page} (${s.preset}): performance ${s.performance} (runs ${s.runs.join(', ')}; goal ≥ ${goal}), ` +
+          `accessibility ${s.accessibility} (goal 100)`,
+      );
+      console.log(
+        `  ${Object.entries(s.metrics)
+          .map(([k, v]) => `${k} ${v}`)
+          .join(' · ')}`,
+      );
+      for (const f of s.failing) console.log(`  below 100 — ${f}`);
+    }
+  } finally {
+    await chrome.kill();
+    server.kill('SIGTERM');
+    rmSync(work, { recursive: true, force: true });
+  }
+}
+
+main().catch((error) => {
+  console.error(error);
+  process.exit(1);
+});
