@@ -76,9 +76,13 @@ describe('every model stores each attribute in its own column', () => {
           values[name] = valueFor(name, attr, index, pass);
         });
         const created = await model.unscoped().create(values, { silent: true, validate: false });
-        const id = created.get('id');
-        const back = (await model.unscoped().findByPk(id as number))!.get({ plain: true }) as Record<string, unknown>;
-        const [[raw]] = (await db().query(`SELECT * FROM ${model.getTableName()} WHERE id = ${Number(id)}`)) as [
+        // Most tables key on an integer id; a few on a natural key (sign_in_throttles.key).
+        const key = model.primaryKeyAttribute;
+        const id = created.get(key) as number | string;
+        const back = (await model.unscoped().findByPk(id))!.get({ plain: true }) as Record<string, unknown>;
+        const [[raw]] = (await db().query(`SELECT * FROM ${model.getTableName()} WHERE ${key} = :id`, {
+          replacements: { id },
+        })) as [
           Record<string, unknown>[],
           unknown,
         ];
