@@ -1,5 +1,5 @@
 /**
- * Benchmark of the scoring engine (issue 3): scoreReview on 50 mechanisms × 2,000 appraisals each
+ * Benchmark of the scoring engine: scoreReview on 50 mechanisms × 2,000 appraisals each
  * (plus 2,000 outcome appraisals) and metaAnalysis on 1,000 studies. Goals: ≤ 5 ms and ≤ 2 ms
  * per call on the development machine. A script, not a test: it prints, it does not assert.
  *

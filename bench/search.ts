@@ -1,7 +1,7 @@
 /**
  * Benchmark (not a test): fuzzy search over a generated 10,000 reviews, with the workbench's own
  * index code (lib/search/documents.ts: fuse.js token search, the same keys and options as
- * GET /api/search). The goal (issue 6) is a p95 of at most 25 ms per query.
+ * GET /api/search). The goal is a p95 of at most 25 ms per query.
  *
  *   npx tsx bench/search.ts [reviews] [queries]
  *

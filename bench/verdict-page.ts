@@ -1,7 +1,7 @@
 /**
  * Benchmark (not a test): the published verdict page /v/[slug] under load, against a static
  * file of similar size served by the same server (`npm start`'s: `next start`, no cache of our
- * own) in the same run; behind nginx, as deployed, see bench/several-processes.ts. Goal (issue 6): the page's throughput at least 0.8 of the static
+ * own) in the same run; behind nginx, as deployed, see bench/several-processes.ts. Goal: the page's throughput at least 0.8 of the static
  * file's. Also measures the page's first-load JavaScript (every <script src> the page's HTML
  * loads, gzipped): goal ≤ 90 KB.
  *

@@ -4,7 +4,7 @@ import { perDomain, type DowngradeDomain } from '@/lib/scoring/appraisal-vocabul
 
 /**
  * One study appraised against one mechanism of a review, or against the claimed outcome itself
- * (mechanismId null): its direction and the GRADE domains (PRODUCT.md step 4). Certainty and
+ * (mechanismId null): its direction and the GRADE domains (README, "How the work flows", step 4). Certainty and
  * applicability are not stored: the scoring engine derives them on every read, so a change to a
  * study's design or population shows up everywhere at once.
  */

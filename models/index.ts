@@ -24,7 +24,7 @@ Invitation.belongsTo(User, { foreignKey: 'invitedById', as: 'invitedBy' });
 User.hasMany(PasswordResetToken, { foreignKey: 'userId', as: 'resetTokens' });
 PasswordResetToken.belongsTo(User, { foreignKey: 'userId', as: 'user' });
 AuditEvent.belongsTo(User, { foreignKey: 'actorId', as: 'actor' });
-// The review workbench (issue 4).
+// The review workbench.
 Team.hasMany(Review, { foreignKey: 'teamId', as: 'reviews' });
 Review.belongsTo(Team, { foreignKey: 'teamId', as: 'team' });
 Review.belongsTo(User, { foreignKey: 'authorId', as: 'author' });
@@ -38,7 +38,7 @@ Team.hasMany(Study, { foreignKey: 'teamId', as: 'studies' });
 Study.belongsTo(Team, { foreignKey: 'teamId', as: 'team' });
 Study.hasMany(Appraisal, { foreignKey: 'studyId', as: 'appraisals' });
 Appraisal.belongsTo(Study, { foreignKey: 'studyId', as: 'study' });
-// Peer review (issue 5).
+// Peer review.
 Review.hasMany(ReviewRound, { foreignKey: 'reviewId', as: 'rounds', onDelete: 'CASCADE' });
 ReviewRound.belongsTo(Review, { foreignKey: 'reviewId', as: 'review' });
 ReviewRound.hasMany(RoundInvitation, { foreignKey: 'roundId', as: 'invitations', onDelete: 'CASCADE' });
@@ -53,7 +53,7 @@ export { Comment, ReviewRound, RoundInvitation, Scorecard };
 export { Appraisal, AuditEvent, Invitation, Mechanism, Membership, PasswordResetToken, Review, Study, Team, User };
 export { ROLES, type Role } from './roles';
 
-// Publishing and following (issue 6).
+// Publishing and following.
 import { Follow } from './follow';
 import { Publication, PublishedVersion } from './published-version';
 Review.hasOne(Publication, { foreignKey: 'reviewId', as: 'publication' });

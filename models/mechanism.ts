@@ -1,7 +1,7 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes } from 'sequelize';
 import { db } from '@/lib/db';
 
-/** A candidate mechanism that could explain a claim's result (PRODUCT.md step 2). */
+/** A candidate mechanism that could explain a claim's result (README, "How the work flows", step 2). */
 export class Mechanism extends Model<InferAttributes<Mechanism>, InferCreationAttributes<Mechanism>> {
   declare id: CreationOptional<number>;
   declare reviewId: number;

@@ -10,7 +10,7 @@ export interface StoredResolution {
   at: string;
 }
 
-/** A peer-review round of a review: who opened it, when it is due, open or closed (issue 5). */
+/** A peer-review round of a review: who opened it, when it is due, open or closed. */
 export class ReviewRound extends Model<InferAttributes<ReviewRound>, InferCreationAttributes<ReviewRound>> {
   declare id: CreationOptional<number>;
   declare reviewId: number;

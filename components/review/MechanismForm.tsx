@@ -55,7 +55,7 @@ const toNumber = (text: string): number | null => (text.trim() === '' ? null : N
  * A candidate mechanism: what it is, what stimulus it needs (minimum intensity and effort, which
  * the dose check compares with the protocol), how plausible it is before any evidence, how big
  * its effect would be, and whether the claim names it as its reason. Percentages on screen,
- * fractions in the request (SCORING.md: fractions everywhere).
+ * fractions in the request (docs/scoring.md: fractions everywhere).
  */
 export function MechanismForm({
   mechanism,

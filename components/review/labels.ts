@@ -25,7 +25,7 @@ export const LOAD_UNIT_LABEL: Record<LoadUnit, string> = {
   'kg-added': 'kg added to body weight',
 };
 
-/** What each unit needs to be converted to a fraction of maximum (SCORING.md §8). */
+/** What each unit needs to be converted to a fraction of maximum (docs/scoring.md §8). */
 export const LOAD_UNIT_HELP: Record<LoadUnit, string> = {
   'percent-max': 'Already on the common scale: 100 % is the most the athlete can hold or lift.',
   'percent-1rm': 'Treated as a fraction of maximum directly (80 %1RM = 0.8).',
@@ -106,7 +106,7 @@ export const DESIGN_LABEL: Record<StudyDesign, string> = {
   'in-vitro': 'In-vitro study',
 };
 
-/** The verdict words are the scoring engine's own (SCORING.md §5), never a second copy. */
+/** The verdict words are the scoring engine's own (docs/scoring.md §5), never a second copy. */
 export const VERDICT_KEY_LABEL: Record<VerdictKey, string> = VERDICT_LABEL;
 
 /** A fraction 0…1 as a whole percentage for people ("72 %"); null shows a dash. */

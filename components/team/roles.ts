@@ -2,7 +2,7 @@ import type { BadgeTone } from '@/components/ui/Badge';
 import { ROLES, type Role } from '@/models/roles';
 
 /**
- * How each role reads on screen (PRODUCT.md, "Who uses it"): its name, what it lets a person do
+ * How each role reads on screen (docs/architecture.md, "The roles"): its name, what it lets a person do
  * said to them ("you …"), and the same said about the role ("a coach …").
  */
 export const ROLE_INFO: Record<Role, { label: string; youCan: string; summary: string; tone: BadgeTone }> = {

@@ -1,6 +1,6 @@
 import { cn } from './cn';
 
-/** The cautions PRODUCT.md asks every verdict and recommendation to carry, worded once. */
+/** The cautions every verdict and recommendation carries (docs/architecture.md, "The roles"), worded once. */
 export const SAFETY_LINE =
   'Loadbearing is education, not a diagnosis or treatment plan. Stop on pain and see a licensed clinician (physiotherapist, sports physician). Defer to local professional regulation.';
 

@@ -1,7 +1,7 @@
 import { DataTypes, type QueryInterface } from 'sequelize';
 
 /**
- * The review workbench (issue 4): claim reviews with their structured protocol and Tiptap body,
+ * The review workbench: claim reviews with their structured protocol and Tiptap body,
  * the candidate mechanisms, the team's evidence library of studies, and the appraisals that
  * link a study to a mechanism (or to the claimed outcome itself).
  *

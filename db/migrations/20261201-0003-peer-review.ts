@@ -1,7 +1,7 @@
 import { DataTypes, type QueryInterface } from 'sequelize';
 
 /**
- * Peer review (issue 5): rounds of blind scoring on a review, who was invited to each, the
+ * Peer review: rounds of blind scoring on a review, who was invited to each, the
  * reviewers' scorecards, and the threaded comments of the settling discussion.
  *
  * A scorecard's per-mechanism ratings and a round's resolutions are JSON: each is read and

@@ -1,7 +1,7 @@
 import { DataTypes, type QueryInterface } from 'sequelize';
 
 /**
- * Publishing (issue 6): the team's two publishing settings, one publication per published review
+ * Publishing: the team's two publishing settings, one publication per published review
  * (its public address, who may read it, whether it was withdrawn), the immutable versions under
  * it, and who follows a team's new verdicts by e-mail.
  *

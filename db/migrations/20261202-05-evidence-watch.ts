@@ -1,7 +1,7 @@
 import { DataTypes, type QueryInterface } from 'sequelize';
 
 /**
- * The evidence watch (lib/publishing/API.md, "Evidence watch"): what the bibliographic registry
+ * The evidence watch (docs/api/publishing.md, "Evidence watch"): what the bibliographic registry
  * last said about each DOI and when it was asked (`doi_checks`), the notice a study carries
  * (`studies.evidenceNotice`), published verdicts whose evidence changed (`evidence_flags`),
  * studies offered to a verdict's authors as new evidence (`evidence_suggestions`), and each run

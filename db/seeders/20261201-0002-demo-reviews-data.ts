@@ -1,7 +1,7 @@
 import type { ConcernLevel, DowngradeDomain } from '../../lib/scoring/appraisal-vocabulary';
 
 /**
- * The demo's three claim reviews (PRODUCT.md, "Demo scenario"). Everything is invented: the
+ * The demo's three claim reviews (the invented demo scenario). Everything is invented: the
  * claims, the studies (./20261201-0002-demo-reviews.ts takes their references from
  * lib/citations/demo-records.ts — a made-up journal, DOIs under the test prefix 10.5555), the
  * people (the demo accounts of ./demo-accounts.ts) and every number. Each review is built so its

@@ -13,7 +13,7 @@ import { DEMO_REVIEWS, DEMO_STUDIES, type DemoReview, type Inline } from './2026
 import { DEMO_TEAM } from './demo-accounts';
 
 /**
- * The demo team's evidence library and its three complete claim reviews (issue 4). Rows are
+ * The demo team's evidence library and its three complete claim reviews. Rows are
  * written with the query interface like the 0001 seeder; each review's verdict is computed by
  * the app's own verdict code (lib/reviews/verdict.ts → lib/scoring) from the same rows before
  * it is stored, and a verdict that differs from the story the demo tells is reported.

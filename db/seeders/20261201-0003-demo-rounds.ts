@@ -2,7 +2,7 @@ import type { Sequelize } from 'sequelize';
 import { DEMO_TEAM } from './demo-accounts';
 
 /**
- * Peer-review rounds of the demo (issue 5), written with the query interface like the other
+ * Peer-review rounds of the demo, written with the query interface like the other
  * seeders:
  * - "Weighted pull-up ladder" (by the owner): a CLOSED round of three reviewers. Their ratings
  *   of "Growth of the lats and elbow flexors" span three bands (2…4), so it was flagged, and the

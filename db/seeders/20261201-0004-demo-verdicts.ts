@@ -4,7 +4,7 @@ import { buildSnapshot } from '../../lib/publishing/snapshot';
 import { DEMO_TEAM } from './demo-accounts';
 
 /**
- * Two published demo verdicts (issue 6) and a follower:
+ * Two published demo verdicts and a follower:
  * - "cold plunges" (approved in the workbench seed): public, at version 2 — version 1 as it was,
  *   then the coach's "what to do instead" advice added, with the "what changed" note;
  * - "weighted pull-up ladder" (approved by the closed round of the 0003 seed): team members only;

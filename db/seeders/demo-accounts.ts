@@ -1,5 +1,5 @@
 /**
- * The invented demo team of PRODUCT.md. Demo data only: the password is public, and seeding
+ * The invented demo team (README, "Demo accounts"). Demo data only: the password is public, and seeding
  * refuses to run in production.
  */
 export const DEMO_PASSWORD = 'loadbearing-demo';

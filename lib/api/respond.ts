@@ -1,7 +1,7 @@
 import { ZodError } from 'zod';
 import { AppError, badRequest, busy, type IssueItem } from './errors';
 
-/** zod issues in the API.md shape: a dotted path and a message each. */
+/** zod issues in the error shape of docs/api/README.md: a dotted path and a message each. */
 export function zodIssues(error: ZodError): IssueItem[] {
   return error.issues.map((issue) => ({
     path: issue.path.map(String).join('.'),

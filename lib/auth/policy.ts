@@ -49,7 +49,7 @@ export const POLICY = {
   'team.members.remove': roles('owner'),
   'team.audit.read': roles('owner'),
   'team.settings.update': roles('owner'),
-  // Athletes read published verdicts, not work in progress (PRODUCT.md, "Who uses it").
+  // Athletes read published verdicts, not work in progress (docs/architecture.md, "The roles").
   'review.list': roles(...STAFF),
   'review.read': roles(...STAFF),
   'review.create': roles('owner', 'coach'),

@@ -1,7 +1,7 @@
 import { composeMail } from './layout';
 import type { Mail } from './send';
 
-/** Mails of publishing (issue 6). Each carries the cautions and a working unsubscribe link. */
+/** Mails of publishing. Each carries the cautions and a working unsubscribe link. */
 
 const CAUTION =
   'A verdict is education, not a diagnosis or treatment plan. Stop on pain and see a licensed clinician (physiotherapist, sports physician), and defer to local professional regulation.';

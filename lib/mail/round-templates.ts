@@ -2,7 +2,7 @@ import { composeMail } from './layout';
 import type { Mail } from './send';
 
 /**
- * The mails of peer review (issue 5). Each links to the page it is about: reviewers to their
+ * The mails of peer review. Each links to the page it is about: reviewers to their
  * scorecard, the author to the round's page. Dates are written in UTC because a mail does not
  * know the reader's time zone.
  */

@@ -12,7 +12,7 @@ import type { Appraisal, Mechanism, Study } from '@/models';
 import type { Direction, EffectDataDTO, EffectMeasure, ForestRowDTO, MetaAnalysisDTO, PoolableDTO } from './types';
 
 /**
- * Effect sizes and their pooling for the forest plot (SCORING.md §6).
+ * Effect sizes and their pooling for the forest plot (docs/scoring.md §6).
  *
  * Two families, never pooled together:
  * - 'smd' — standardized mean differences. Means + SDs give Hedges' g with its variance;

@@ -4,7 +4,7 @@ import type { LoadUnit, ProtocolDTO } from './types';
 
 /**
  * The protocol's load on the one scale the scoring uses: a fraction (0…1) of the athlete's
- * maximum for that exercise (SCORING.md §2, §3, §8). This file maps the claim form's units onto
+ * maximum for that exercise (docs/scoring.md §2, §3, §8). This file maps the claim form's units onto
  * the engine's `intensityFromLoad` (lib/training/dose.ts) so the conversion lives in one place;
  * it is pure, so the form shows the converted value live and the server scores the same number.
  *
@@ -17,10 +17,10 @@ import type { LoadUnit, ProtocolDTO } from './types';
  *   is body weight plus the most they can add (the reference athlete), so
  *   intensity = (bw · value/100) / (bw + maxAdded) = (bw + added) / (bw + maxAdded).
  * - `kg-added` is the load added to body weight; negative means assistance (a pulley, feet on
- *   the floor): intensity = (bw + added) / (bw + maxAdded) (SCORING.md §8).
+ *   the floor): intensity = (bw + added) / (bw + maxAdded) (docs/scoring.md §8).
  * - Body-weight units need the reference athlete (body weight and maximum added load). Without
  *   it, or without a load, the intensity is unknown (null) and the scoring treats the dose as
- *   unknown: no dose penalty, dose match 1 (SCORING.md "Precise rules").
+ *   unknown: no dose penalty, dose match 1 (docs/scoring.md §8).
  * - A load above the reference athlete's maximum, or assistance beyond body weight, is refused
  *   by the form (lib/validation/reviews.ts), so a stored intensity is always within 0…1.
  */

@@ -3,7 +3,7 @@ import type { EvidenceNotice } from '@/lib/watch/notices';
 /**
  * The shapes the workbench's routes send and its pages read. Written first so the server side
  * (lib/reviews, lib/library, app/api) and the client side (components, pages) agree. Fractions
- * are 0…1 everywhere (intensity, prior, applicability), as in SCORING.md.
+ * are 0…1 everywhere (intensity, prior, applicability), as in docs/scoring.md.
  */
 
 import type { Direction, Effort, Magnitude } from '@/lib/scoring/types';
@@ -197,7 +197,6 @@ export interface ImportResultDTO {
 }
 
 // ---------------------------------------------------------------------------------------------
-// Added by the server side of issue 4 (additions only; nothing above was renamed or removed).
 // ---------------------------------------------------------------------------------------------
 
 /** One line of the scoring engine's working: a sentence with its numbers (lib/scoring WorkingStep). */
@@ -246,7 +245,7 @@ export interface DoseCheckMechanismDTO {
   dosePenalty: number;
 }
 
-/** The protocol's dose against each mechanism's minimum stimulus (SCORING.md §3, §8). */
+/** The protocol's dose against each mechanism's minimum stimulus (docs/scoring.md §3, §8). */
 export interface DoseCheckDTO {
   protocolIntensity: number | null;
   /** How the load became a fraction of maximum, in one sentence. */

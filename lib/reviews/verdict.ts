@@ -20,7 +20,7 @@ import type {
 
 /**
  * The verdict of a review: loads the review's rows as plain data and hands them to lib/scoring
- * (which never loads anything itself, ARCHITECTURE.md). Also keeps the cached verdict key on
+ * (which never loads anything itself, docs/architecture.md). Also keeps the cached verdict key on
  * the review row, which the dashboard lists and filters by.
  */
 
@@ -182,7 +182,7 @@ export function scoreReviewData(data: AnyReviewData): ScoredReview {
   return { input, score: scoreReview(input), derived, ids, appraisalOrder };
 }
 
-/** The protocol's dose against every mechanism's minimum (SCORING.md §3 and §8). */
+/** The protocol's dose against every mechanism's minimum (docs/scoring.md §3 and §8). */
 export function doseCheck(data: AnyReviewData): DoseCheckDTO {
   const protocol = toProtocolDTO(data.review.protocol);
   const { secondsPerSet, setsPerSession, sessionsPerDay, daysPerWeek, minHoursBetween } = protocol;

@@ -15,7 +15,7 @@ import type { AgreementDTO, Contribution, MechanismAgreementDTO, ResolutionDTO }
  * database.
  */
 
-/** The whole 0…6 rating scale: weighted kappa spaces its weights over it (SCORING.md §7). */
+/** The whole 0…6 rating scale: weighted kappa spaces its weights over it (docs/scoring.md §7). */
 export const BAND_CATEGORIES = [0, 1, 2, 3, 4, 5, 6] as const;
 
 export interface AgreementInput {

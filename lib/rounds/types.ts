@@ -3,7 +3,7 @@ import type { DowngradeDomain } from '@/lib/scoring/appraisal-vocabulary';
 
 /**
  * The shapes the peer-review routes send and the round pages read. Importable by client
- * components (no server code here). Bands are the likelihood bands 0…6 of SCORING.md §4/§7.
+ * components (no server code here). Bands are the likelihood bands 0…6 of docs/scoring.md §4/§7.
  */
 
 export const ROUND_STATUSES = ['open', 'closed'] as const;

@@ -51,7 +51,7 @@ const healthWord = (injured: boolean): string => (injured ? 'injured' : 'healthy
 const article = (word: string): string => `${/^[aeiou]/.test(word) ? 'an' : 'a'} ${word}`;
 
 /**
- * Applicability = populationMatch × doseMatch, with the reasons (SCORING.md §2 and its precise
+ * Applicability = populationMatch × doseMatch, with the reasons (docs/scoring.md §2 and its precise
  * rules).
  *
  * - populationMatch: levels apart on untrained < recreational < trained < elite, plus one level

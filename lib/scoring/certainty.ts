@@ -20,7 +20,7 @@ import { optionalBoolean, requireFinite, requireObject, requireOneOf } from './v
 import type { CertaintyLevel, Concern, StudyDesign } from './types';
 
 /**
- * What the coach records about one study for one question (SCORING.md §1).
+ * What the coach records about one study for one question (docs/scoring.md §1).
  *
  * @example
  * const input: CertaintyInput = { design: 'cohort', largeEffect: 1, doseResponse: true };
@@ -94,7 +94,7 @@ const LEVEL_WORDS: Record<1 | 2 | 3 | 4, string> = {
 const levelsText = (n: number): string => (Math.abs(n) === 1 ? 'one level' : 'two levels');
 
 /**
- * GRADE certainty of one appraisal, with every step of the working (SCORING.md §1).
+ * GRADE certainty of one appraisal, with every step of the working (docs/scoring.md §1).
  *
  * The design sets the start; each of the five domains rates down 0, 1 or 2 levels; only evidence
  * that starts at low or below and was not rated down can be rated up (large effect, dose-response

@@ -2,8 +2,8 @@
  * Every constant of the scoring model, in one place, each with where it comes from.
  *
  * Changing a number here changes every verdict the app shows, so each one names its source:
- * a published handbook or paper, or "our model, SCORING.md" where the number is a choice this
- * product made and documents in ../shared/SCORING.md.
+ * a published handbook or paper, or "our model, docs/scoring.md" where the number is a choice this
+ * product made and documents in docs/scoring.md.
  *
  * @example
  * import { CERTAINTY_WEIGHT, LIKELIHOOD_RATIO_PER_APPRAISAL } from '@/lib/scoring/constants';
@@ -19,7 +19,7 @@
 
 /**
  * Study designs the appraisal form offers, in the order the form lists them.
- * Source: our model, SCORING.md §1 (design names after the GRADE Handbook, 2013).
+ * Source: our model, docs/scoring.md §1 (design names after the GRADE Handbook, 2013).
  *
  * @example
  * STUDY_DESIGNS.includes('randomized'); // true
@@ -44,7 +44,7 @@ export const STUDY_DESIGNS = [
  * Source: GRADE Handbook (Schünemann et al., eds., 2013) — randomized evidence starts high,
  * observational evidence starts low. Case series, case reports and expert opinion at 1 and the
  * treatment of animal and in-vitro work (start 4, indirectness forced to very serious) are
- * our model, SCORING.md §1.
+ * our model, docs/scoring.md §1.
  *
  * @example
  * DESIGN_START_SCORE.cohort; // 2
@@ -66,7 +66,7 @@ export const DESIGN_START_SCORE = {
 /**
  * Designs whose indirectness counts as at least very serious: a rat tendon or a cell culture
  * speaks to a climber's finger only through a chain of assumptions.
- * Source: our model, SCORING.md §1.
+ * Source: our model, docs/scoring.md §1.
  *
  * @example
  * FORCED_INDIRECT_DESIGNS.includes('animal'); // true
@@ -80,7 +80,7 @@ export { CONCERN_LEVELS, DOWNGRADE_DOMAINS } from './appraisal-vocabulary';
 /**
  * Upgrading applies only to evidence that starts at this score or lower.
  * Source: GRADE Handbook (2013) says upgrading is mainly for observational evidence; the
- * exact cut at 2 is our model, SCORING.md §1.
+ * exact cut at 2 is our model, docs/scoring.md §1.
  *
  * @example
  * UPGRADE_MAX_START; // 2
@@ -138,7 +138,7 @@ export const CERTAINTY_LEVELS = ['very-low', 'low', 'moderate', 'high'] as const
 
 /**
  * Training status, least trained first; the distance between two positions is the number of
- * levels apart. Source: our model, SCORING.md §2.
+ * levels apart. Source: our model, docs/scoring.md §2.
  *
  * @example
  * TRAINING_STATUSES.indexOf('elite'); // 3
@@ -147,7 +147,7 @@ export const TRAINING_STATUSES = ['untrained', 'recreational', 'trained', 'elite
 
 /**
  * populationMatch by levels apart (index 0 = same level, 1 = one apart, 2+ = further).
- * Source: our model, SCORING.md §2.
+ * Source: our model, docs/scoring.md §2.
  *
  * @example
  * POPULATION_MATCH_BY_DISTANCE[1]; // 0.75
@@ -156,7 +156,7 @@ export const POPULATION_MATCH_BY_DISTANCE = [1.0, 0.75, 0.5] as const;
 
 /**
  * Extra levels of distance when one side is injured and the other healthy.
- * Source: our model, SCORING.md §2.
+ * Source: our model, docs/scoring.md §2.
  *
  * @example
  * INJURY_EXTRA_LEVELS; // 1
@@ -165,7 +165,7 @@ export const INJURY_EXTRA_LEVELS = 1;
 
 /**
  * doseMatch never falls below this, so a study at a very different dose still counts a little.
- * Source: our model, SCORING.md §2.
+ * Source: our model, docs/scoring.md §2.
  *
  * @example
  * DOSE_MATCH_FLOOR; // 0.1
@@ -177,7 +177,7 @@ export const DOSE_MATCH_FLOOR = 0.1;
 // ---------------------------------------------------------------------------------------------
 
 /**
- * Prior plausibility when the coach gives none. Source: our model, SCORING.md §3.
+ * Prior plausibility when the coach gives none. Source: our model, docs/scoring.md §3.
  *
  * @example
  * DEFAULT_PRIOR; // 0.5
@@ -186,7 +186,7 @@ export const DEFAULT_PRIOR = 0.5;
 
 /**
  * A prior is clamped into this range so that no opinion is beyond the reach of evidence.
- * Source: our model, SCORING.md §3.
+ * Source: our model, docs/scoring.md §3.
  *
  * @example
  * PRIOR_CLAMP.max; // 0.99
@@ -194,7 +194,7 @@ export const DEFAULT_PRIOR = 0.5;
 export const PRIOR_CLAMP = { min: 0.01, max: 0.99 } as const;
 
 /**
- * Direction of an appraisal as the sign of its log-odds term. Source: our model, SCORING.md §3.
+ * Direction of an appraisal as the sign of its log-odds term. Source: our model, docs/scoring.md §3.
  *
  * @example
  * DIRECTION_SIGN.against; // -1
@@ -202,7 +202,7 @@ export const PRIOR_CLAMP = { min: 0.01, max: 0.99 } as const;
 export const DIRECTION_SIGN = { supports: 1, against: -1, neutral: 0 } as const;
 
 /**
- * Weight of an appraisal by its certainty. Source: our model, SCORING.md §3 (the ordering follows
+ * Weight of an appraisal by its certainty. Source: our model, docs/scoring.md §3 (the ordering follows
  * the GRADE levels; the numbers are ours).
  *
  * @example
@@ -212,7 +212,7 @@ export const CERTAINTY_WEIGHT = { high: 1.0, moderate: 0.6, low: 0.3, 'very-low'
 
 /**
  * Odds multiplier of one fully applicable, high-certainty appraisal; its log is the unit of
- * evidence. Source: our model, SCORING.md §3.
+ * evidence. Source: our model, docs/scoring.md §3.
  *
  * @example
  * Math.log(LIKELIHOOD_RATIO_PER_APPRAISAL); // 1.3863
@@ -221,7 +221,7 @@ export const LIKELIHOOD_RATIO_PER_APPRAISAL = 4;
 
 /**
  * Odds divisor for a whole missing dose (shortfall 1): ln(20) per unit of shortfall.
- * Source: our model, SCORING.md §3.
+ * Source: our model, docs/scoring.md §3.
  *
  * @example
  * Math.log(DOSE_PENALTY_ODDS); // 2.9957
@@ -230,7 +230,7 @@ export const DOSE_PENALTY_ODDS = 20;
 
 /**
  * Effort levels in order, with their position on the 0…3 effort scale.
- * Source: our model, SCORING.md §3.
+ * Source: our model, docs/scoring.md §3.
  *
  * @example
  * EFFORT_SCALE.hard; // 2
@@ -238,7 +238,7 @@ export const DOSE_PENALTY_ODDS = 20;
 export const EFFORT_SCALE = { easy: 0, moderate: 1, hard: 2, 'to-failure': 3 } as const;
 
 /**
- * Span of the effort scale; an effort shortfall is divided by it. Source: our model, SCORING.md §3.
+ * Span of the effort scale; an effort shortfall is divided by it. Source: our model, docs/scoring.md §3.
  *
  * @example
  * EFFORT_SPAN; // 3
@@ -256,7 +256,7 @@ export const EFFORT_SPAN = 3;
 export const MAGNITUDE_VALUE = { none: 0, small: 0.2, moderate: 0.5, large: 0.8 } as const;
 
 /**
- * Magnitude assumed when a mechanism states none. Source: our model, SCORING.md (precise rules).
+ * Magnitude assumed when a mechanism states none. Source: our model, docs/scoring.md.
  *
  * @example
  * DEFAULT_MAGNITUDE; // 'moderate'
@@ -282,7 +282,7 @@ export const PROBABILITY_GUARD = 2 ** -53;
  * next band's edge, excluded, and the top band includes 1.
  * Source: IPCC Fourth Assessment Report, Working Group II, likelihood scale (2007); Mastrandrea
  * et al. (2010), Guidance Note for Lead Authors of the IPCC AR5 on Consistent Treatment of
- * Uncertainties. "0.99 is virtually certain" (the IPCC says "> 99 %") is our model, SCORING.md §4.
+ * Uncertainties. "0.99 is virtually certain" (the IPCC says "> 99 %") is our model, docs/scoring.md §4.
  *
  * @example
  * LIKELIHOOD_SCALE[6]; // { term: 'virtually certain', min: 0.99 }
@@ -303,7 +303,7 @@ export const LIKELIHOOD_SCALE = [
 
 /**
  * Below this evidence weight W the review has too little evidence for any verdict.
- * Source: our model, SCORING.md §5 — one fully applicable high-certainty appraisal is W = 1.
+ * Source: our model, docs/scoring.md §5 — one fully applicable high-certainty appraisal is W = 1.
  *
  * @example
  * MIN_EVIDENCE_WEIGHT; // 1
@@ -312,7 +312,7 @@ export const MIN_EVIDENCE_WEIGHT = 1.0;
 
 /**
  * Probability cut-offs of the verdict table; they sit on the edges of the likelihood scale so
- * the verdict and the words always agree. Source: our model, SCORING.md §5.
+ * the verdict and the words always agree. Source: our model, docs/scoring.md §5.
  *
  * @example
  * VERDICT_THRESHOLDS.holds; // 0.66
@@ -320,7 +320,7 @@ export const MIN_EVIDENCE_WEIGHT = 1.0;
 export const VERDICT_THRESHOLDS = { notSupportedBelow: 0.33, uncertainBelow: 0.66, holds: 0.66 } as const;
 
 /**
- * Verdict keys in the order the table of SCORING.md §5 tests them. Source: our model, SCORING.md §5.
+ * Verdict keys in the order the table of docs/scoring.md §5 tests them. Source: our model, docs/scoring.md §5.
  *
  * @example
  * VERDICT_KEYS[0]; // 'insufficient'
@@ -328,7 +328,7 @@ export const VERDICT_THRESHOLDS = { notSupportedBelow: 0.33, uncertainBelow: 0.6
 export const VERDICT_KEYS = ['insufficient', 'not-supported', 'uncertain', 'supported', 'other-reasons'] as const;
 
 /**
- * The words a reader sees for each verdict. Source: our model, SCORING.md §5.
+ * The words a reader sees for each verdict. Source: our model, docs/scoring.md §5.
  *
  * @example
  * VERDICT_LABEL.supported; // 'Holds up'
@@ -347,7 +347,7 @@ export const VERDICT_LABEL = {
 
 /**
  * Added to every cell of a 2×2 table that has a zero cell, so logs and reciprocals exist.
- * Source: common practice (the Haldane–Anscombe correction); SCORING.md (precise rules).
+ * Source: common practice (the Haldane–Anscombe correction); docs/scoring.md.
  *
  * @example
  * CONTINUITY_CORRECTION; // 0.5
@@ -382,7 +382,7 @@ export const REML_CONTROL = { tolerance: 1e-12, maxIterations: 1000 } as const;
 
 /**
  * Smallest number of studies for a prediction interval (t with k − 2 df needs k ≥ 3).
- * Source: SCORING.md §6 and precise rules (the interval is after Higgins, Thompson &
+ * Source: docs/scoring.md §6 and precise rules (the interval is after Higgins, Thompson &
  * Spiegelhalter 2009 — citation from memory).
  *
  * @example
@@ -420,7 +420,7 @@ export const KAPPA_BANDS = [
 
 /**
  * Reviewers whose ratings of one mechanism span this many likelihood bands or more disagree
- * enough to talk. Source: our model, SCORING.md §7.
+ * enough to talk. Source: our model, docs/scoring.md §7.
  *
  * @example
  * DEFAULT_SPREAD_FLAG; // 2
@@ -451,7 +451,7 @@ export const BRZYCKI = { numerator: 36, offset: 37 } as const;
 
 /**
  * Repetition range over which the 1RM formulas are used; beyond about 10–12 reps both drift.
- * Source: common practice; the cut at 12 is our model, SCORING.md (precise rules).
+ * Source: common practice; the cut at 12 is our model, docs/scoring.md.
  *
  * @example
  * ONE_REP_MAX_REPS.max; // 12
@@ -460,7 +460,7 @@ export const ONE_REP_MAX_REPS = { min: 1, max: 12 } as const;
 
 /**
  * Waking hours available for spacing sessions within a day, unless the protocol says otherwise.
- * Source: common practice (8 hours of sleep); SCORING.md (precise rules).
+ * Source: common practice (8 hours of sleep); docs/scoring.md.
  *
  * @example
  * DEFAULT_WAKING_HOURS; // 16
@@ -468,7 +468,7 @@ export const ONE_REP_MAX_REPS = { min: 1, max: 12 } as const;
 export const DEFAULT_WAKING_HOURS = 16;
 
 /**
- * Training days in a week when the protocol does not say. Source: our model, SCORING.md.
+ * Training days in a week when the protocol does not say. Source: our model, docs/scoring.md.
  *
  * @example
  * DEFAULT_DAYS_PER_WEEK; // 7

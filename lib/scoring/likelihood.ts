@@ -18,7 +18,7 @@ export interface LikelihoodBand {
 /**
  * The seven bands of the likelihood scale, ascending: index 0 is "exceptionally unlikely" and
  * index 6 "virtually certain". Reviewers rate mechanisms on these indices (the 0…6 scale of
- * SCORING.md §7), so the order is part of the contract.
+ * docs/scoring.md §7), so the order is part of the contract.
  *
  * @example
  * LIKELIHOOD_BANDS[4]; // { term: 'likely', min: 0.66, max: 0.9 }
@@ -51,7 +51,7 @@ export function likelihoodBand(p: number): number {
 }
 
 /**
- * The calibrated words for a probability, spelled exactly as SCORING.md §4, so that a number is
+ * The calibrated words for a probability, spelled exactly as docs/scoring.md §4, so that a number is
  * never shown without its meaning.
  *
  * @example

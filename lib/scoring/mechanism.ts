@@ -21,7 +21,7 @@ const LN_LR = Math.log(LIKELIHOOD_RATIO_PER_APPRAISAL);
 const LN_DOSE = Math.log(DOSE_PENALTY_ODDS);
 
 /**
- * Everything the model needs to score one mechanism (SCORING.md §3).
+ * Everything the model needs to score one mechanism (docs/scoring.md §3).
  *
  * @example
  * const input: MechanismInput = {
@@ -392,7 +392,7 @@ export function finishProbability(
 }
 
 /**
- * Probability that a mechanism operates under this protocol, by log-odds updating (SCORING.md §3):
+ * Probability that a mechanism operates under this protocol, by log-odds updating (docs/scoring.md §3):
  *
  *     logit(p) = logit(prior) + Σ s_i · w(c_i) · a_i · ln 4 − ln 20 · (shortfall_I + shortfall_E)
  *

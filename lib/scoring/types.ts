@@ -11,7 +11,7 @@ import type {
 } from './constants';
 
 /**
- * A study design as spelled in SCORING.md §1.
+ * A study design as spelled in docs/scoring.md §1.
  *
  * @example
  * const design: StudyDesign = 'cohort';
@@ -75,7 +75,7 @@ export type TrainingStatus = (typeof TRAINING_STATUSES)[number];
 export type LikelihoodTerm = (typeof LIKELIHOOD_SCALE)[number]['term'];
 
 /**
- * A verdict key of SCORING.md §5.
+ * A verdict key of docs/scoring.md §5.
  *
  * @example
  * const verdict: VerdictKey = 'other-reasons';

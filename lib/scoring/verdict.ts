@@ -96,7 +96,7 @@ export function verdictKey(evidenceWeight: number, outcomeProbability: number, s
 }
 
 /**
- * Scores a review end to end (SCORING.md §3–§5): the claimed outcome from its direct appraisals
+ * Scores a review end to end (docs/scoring.md §3–§5): the claimed outcome from its direct appraisals
  * (no dose penalty), every mechanism under the review's protocol, the evidence weight W over all
  * appraisals, the verdict by the first row of §5's table that holds, and the mechanisms ranked by
  * expected contribution, then probability, then input order, with their shares.

@@ -130,7 +130,7 @@ function remlTau2(y: Float64Array, v: Float64Array, start: number): { tau2: numb
 }
 
 /**
- * Inverse-variance meta-analysis of effect sizes (SCORING.md §6): fixed effect, or random effects
+ * Inverse-variance meta-analysis of effect sizes (docs/scoring.md §6): fixed effect, or random effects
  * with τ² from DerSimonian–Laird (default) or REML. Returns the pooled estimate, SE, CI, z and p,
  * Cochran's Q with df and p(Q), τ², I² = max(0, (Q − df)/Q)·100 and H² = Q/df (Higgins &
  * Thompson 2002; the same formulas for every method), per-study weights in percent, and for random

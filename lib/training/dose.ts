@@ -48,7 +48,7 @@ export function isEffort(value: unknown): value is Effort {
 }
 
 /**
- * Estimated one-repetition maximum from a set of `reps` with `weight` (SCORING.md §8):
+ * Estimated one-repetition maximum from a set of `reps` with `weight` (docs/scoring.md §8):
  * Epley w·(1 + r/30) or Brzycki w·36/(37 − r). One repetition is the maximum itself for both.
  * Reps must be a whole number from 1 to 12: beyond that the formulas drift apart quickly.
  *
@@ -68,7 +68,7 @@ export function oneRepMax(weight: number, reps: number, formula: 'epley' | 'brzy
 }
 
 /**
- * Load for a hang or isometric pull at a fraction of the athlete's maximum (SCORING.md §8):
+ * Load for a hang or isometric pull at a fraction of the athlete's maximum (docs/scoring.md §8):
  * total = (body weight + max added load) × fraction; added = total − body weight. A negative
  * `added` is assistance (a pulley counterweight or feet on the floor). A negative `maxAddedLoad`
  * means the athlete's maximum itself needs assistance.

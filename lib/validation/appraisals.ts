@@ -4,7 +4,7 @@ import { LARGE_EFFECTS, perDomain } from '@/lib/scoring/appraisal-vocabulary';
 import { idParam } from './reviews';
 
 /**
- * The appraisal form (PRODUCT.md step 4): one study against one mechanism, or against the
+ * The appraisal form (README, "How the work flows", step 4): one study against one mechanism, or against the
  * claimed outcome itself (mechanismId null). Shared by the form and the route handlers.
  */
 
@@ -41,7 +41,7 @@ export const appraisalFields = {
   notes: z.string({ error: 'Notes are text.' }).trim().max(10000, { error: 'Keep the notes under 10,000 characters.' }),
 };
 
-/** An override of the suggested applicability must say why (SCORING.md §2: "with a written reason"). */
+/** An override of the suggested applicability must say why (docs/scoring.md §2: "with a written reason"). */
 export function overrideIssue(value: { applicabilityOverride?: number | null; overrideReason?: string | null }) {
   if (value.applicabilityOverride === null || value.applicabilityOverride === undefined) return null;
   if ((value.overrideReason ?? '').trim().length >= 3) return null;

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { idParam } from '@/lib/validation/reviews';
 
-/** Schemas of publishing, following and search (issue 6), shared by the forms and the route handlers. */
+/** Schemas of publishing, following and search, shared by the forms and the route handlers. */
 
 export const VISIBILITIES = ['team', 'public'] as const;
 export type Visibility = (typeof VISIBILITIES)[number];

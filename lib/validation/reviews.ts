@@ -27,7 +27,7 @@ const number = (what: string) => z.number({ error: `${what} must be a number.` }
 const wholeNumber = (what: string) => number(what).int({ error: `${what} must be a whole number.` });
 
 // ---------------------------------------------------------------------------------------------
-// Protocol: the claim's dose (PRODUCT.md step 1)
+// Protocol: the claim's dose (README, "How the work flows", step 1)
 // ---------------------------------------------------------------------------------------------
 
 export const protocolFields = {
@@ -360,7 +360,7 @@ export const reviewListQuery = z.object({
 });
 
 // ---------------------------------------------------------------------------------------------
-// Mechanisms (PRODUCT.md step 2)
+// Mechanisms (README, "How the work flows", step 2)
 // ---------------------------------------------------------------------------------------------
 
 export const mechanismFields = {
@@ -380,7 +380,7 @@ export const mechanismFields = {
     .max(1, { error: 'Minimum intensity is a fraction of maximum, 0 to 1.' })
     .nullable(),
   minEffort: z.enum(EFFORTS, { error: `Minimum effort must be one of: ${EFFORTS.join(', ')}.` }).nullable(),
-  // Strictly inside (0, 1): the model works on log-odds (SCORING.md "Precise rules": a prior
+  // Strictly inside (0, 1): the model works on log-odds (docs/scoring.md §8: a prior
   // outside (0, 1) is an error).
   prior: z
     .number({ error: 'The prior must be a number.' })

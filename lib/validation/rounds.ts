@@ -4,7 +4,7 @@ import { idField, idParam } from './reviews';
 
 /**
  * Schemas of peer review, shared by the round pages and the route handlers (a bad body is a 400
- * in the API.md shape and changes nothing).
+ * in the error shape of docs/api/README.md and changes nothing).
  */
 
 export const roundParams = z.object({ id: idParam, roundId: idParam });

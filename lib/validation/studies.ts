@@ -4,7 +4,7 @@ import { STUDY_DESIGNS, TRAINING_STATUSES } from '@/lib/reviews/types';
 import { idField, idParam, tagsSchema } from './reviews';
 
 /**
- * The evidence library (PRODUCT.md step 3): a study comes in by pasted source (DOI, BibTeX, RIS
+ * The evidence library (README, "How the work flows", step 3): a study comes in by pasted source (DOI, BibTeX, RIS
  * or CSL-JSON) or by hand, and carries what the appraisal needs. Shared by the library forms
  * and the route handlers.
  */

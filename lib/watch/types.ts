@@ -1,7 +1,7 @@
 import type { VerdictKey } from '@/lib/reviews/types';
 import type { EvidenceNotice } from './notices';
 
-/** What the evidence watch's routes and pages send (lib/publishing/API.md, "Evidence watch"). */
+/** What the evidence watch's routes and pages send (docs/api/publishing.md, "Evidence watch"). */
 
 /** The verdict as it would be without one study: the leave-one-out row of docs/scoring.md §9. */
 export interface DryRunDTO {

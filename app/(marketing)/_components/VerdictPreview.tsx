@@ -1,6 +1,6 @@
 import { VerdictChip } from '@/components/verdict/VerdictChip';
 
-// An invented example (PRODUCT.md demo scenario), so a visitor sees the kind of page athletes get.
+// An invented example (the demo scenario), so a visitor sees the kind of page athletes get.
 const MECHANISMS = [
   { name: 'Practice: grip position and pinch technique', term: 'likely', width: 'w-[78%]', tone: 'bg-granite-500' },
   {

@@ -43,7 +43,7 @@ const ROUTES: { name: string; handler: Handler; method: string; signedIn: boolea
   { name: 'POST /api/invitations/:token/accept', handler: accept.POST, method: 'POST', signedIn: false, missing: { name: 'Only Name' }, wrongTypes: { name: 3, password: 4 } },
 ];
 
-describe('bad input is a 400 in the API.md shape and changes nothing', () => {
+describe('bad input is a 400 in the error shape of docs/api/README.md and changes nothing', () => {
   for (const route of ROUTES) {
     const client = () => (route.signedIn ? owner : new Client());
     const cases: [string, { rawBody?: string; json?: unknown }][] = [

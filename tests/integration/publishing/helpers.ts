@@ -8,7 +8,7 @@ import { newReview } from '../reviews/helpers';
 /**
  * A review ready to publish, made through the workbench's own routes: a claim, two mechanisms,
  * a body with a mechanism block, a hostile-looking paragraph, and recommendations. Its status is
- * set to `approved` directly: closing a peer-review round is another module's job (issue 5).
+ * set to `approved` directly: closing a peer-review round is another module's job.
  */
 export async function readyReview(
   author: Client,

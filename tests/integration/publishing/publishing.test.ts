@@ -70,7 +70,7 @@ describe('who may publish what', () => {
   });
 });
 
-describe('bad input: 400 in the API.md shape, nothing changed', () => {
+describe('bad input: 400 in the error shape of docs/api/README.md, nothing changed', () => {
   it.each([
     ['no body', undefined, ''],
     ['malformed JSON', undefined, '{"visibility":'],

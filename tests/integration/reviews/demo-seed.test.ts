@@ -22,7 +22,7 @@ beforeAll(async () => {
   ).toBe(200);
 });
 
-describe('demo seed: the three reviews of PRODUCT.md', () => {
+describe('demo seed: the three invented demo reviews', () => {
   it('seeds three complete reviews whose verdicts, recomputed by the verdict route, differ as the story says', async () => {
     const list = await owner.call(reviewsRoute.GET);
     expect(list.status).toBe(200);

@@ -231,7 +231,7 @@ describe('appraisals', () => {
       json: { studyId: s.sameRct, mechanismId: null, direction: 'supports', riskOfBias: 'serious' },
     });
     expect(res.status).toBe(201);
-    // SCORING.md §1: a randomized trial starts at 4 (high); serious risk of bias −1 → 3, moderate.
+    // docs/scoring.md §1: a randomized trial starts at 4 (high); serious risk of bias −1 → 3, moderate.
     // §2: same training status, same health, same intensity (0.8 and 0.8) → 1.0 × 1.0.
     expect(res.body.appraisal).toMatchObject({
       reviewId,
@@ -269,7 +269,7 @@ describe('appraisals', () => {
       json: { studyId: s.cohort, mechanismId: tendon, direction: 'against', largeEffect: 1, doseResponse: true },
     });
     expect(res.body.appraisal.suggestedApplicability).toBe(0.5);
-    // SCORING.md §1: a cohort starts at 2; +1 large effect, +1 dose-response → 4, high.
+    // docs/scoring.md §1: a cohort starts at 2; +1 large effect, +1 dose-response → 4, high.
     expect(res.body.appraisal.certainty).toBe('high');
   });
 
@@ -400,7 +400,7 @@ describe('appraisals', () => {
   it('moves the cached verdict the dashboard shows', async () => {
     const list = await t.coach.call(reviews.GET, { path: `/api/reviews?teamId=${t.teamId}` });
     const mine = list.body.reviews.find((r: { id: number }) => r.id === reviewId);
-    // By hand (SCORING.md §3–§5): W = 0.6·1 (outcome) + 0.3·0.375 (neural) + 1·0.5 + 0.6·1 (tendon) = 1.8125 ≥ 1;
+    // By hand (docs/scoring.md §3–§5): W = 0.6·1 (outcome) + 0.3·0.375 (neural) + 1·0.5 + 0.6·1 (tendon) = 1.8125 ≥ 1;
     // P_outcome = logistic(0.6·ln 4) = 0.697 ≥ 0.66; stated "Neural drive": logistic(logit 0.7 + 0.3·0.375·ln 4) = 0.731 ≥ 0.66.
     expect(mine.verdict).toBe('supported');
     const other = list.body.reviews.find((r: { id: number }) => r.id === otherReviewId);

@@ -77,7 +77,7 @@ describe('POST /api/reviews — capture a claim', () => {
   });
 });
 
-describe('bad input on the review routes is a 400 in the API.md shape and changes nothing', () => {
+describe('bad input on the review routes is a 400 in the error shape of docs/api/README.md and changes nothing', () => {
   let reviewId: number;
   beforeAll(async () => {
     reviewId = (await create(t.coach)).body.review.id;

@@ -96,7 +96,7 @@ describe('GET /api/reviews/:id/verdict', () => {
       'steps',
       'verdict',
     ]);
-    // One high-certainty, fully applicable supporting appraisal: odds × 4 → 0.8 (SCORING.md §3).
+    // One high-certainty, fully applicable supporting appraisal: odds × 4 → 0.8 (docs/scoring.md §3).
     expect(v.outcome.probability).toBeCloseTo(0.8, 12);
     expect(v.outcome.term).toBe('likely');
     expect(v.evidenceWeight).toBeCloseTo(2, 12);
@@ -114,7 +114,7 @@ describe('GET /api/reviews/:id/verdict', () => {
       spacing: { ok: true, hoursNeeded: 6 },
     });
     const tendon = v.dose.perMechanism.find((m: { id: number }) => m.id === mechanismId);
-    // shortfall_I = (0.9 − 0.8) / 0.9; shortfall_E = (3 − 2) / 3; penalty = ln 20 × their sum (SCORING.md §3).
+    // shortfall_I = (0.9 − 0.8) / 0.9; shortfall_E = (3 − 2) / 3; penalty = ln 20 × their sum (docs/scoring.md §3).
     expect(tendon.intensityShortfall).toBeCloseTo(0.1 / 0.9, 12);
     expect(tendon.effortShortfall).toBeCloseTo(1 / 3, 12);
     expect(tendon.dosePenalty).toBeCloseTo(Math.log(20) * (0.1 / 0.9 + 1 / 3), 12);

@@ -46,7 +46,7 @@ beforeAll(async () => {
 });
 
 describe('opening a round', () => {
-  it('refuses bad input with 400 in the API.md shape and changes nothing', async () => {
+  it('refuses bad input with 400 in the error shape of docs/api/README.md and changes nothing', async () => {
     const before = await roundSnapshot();
     const cases: unknown[] = [
       {},
@@ -253,7 +253,7 @@ describe('blindness at the HTTP level', () => {
 });
 
 describe('scorecard validation', () => {
-  it('400s in the API.md shape that change nothing', async () => {
+  it('400s in the error shape of docs/api/README.md that change nothing', async () => {
     const fresh = await reviewWithMechanisms(t, 'Validation review');
     const opened = await t.coach.call(roundsRoute.POST, {
       params: { id: String(fresh.reviewId) },

@@ -19,7 +19,7 @@ const find = (client: TeamFixture['owner'], q: string, extra = '') =>
   client.call(search.GET, { path: `/api/search?q=${encodeURIComponent(q)}&teamId=${t.teamId}${extra}` });
 
 describe('GET /api/search', () => {
-  it('is for staff: athletes 403, outsiders 404, signed out 401; an empty or over-long q is 400 in the API.md shape', async () => {
+  it('is for staff: athletes 403, outsiders 404, signed out 401; an empty or over-long q is 400 in the error shape of docs/api/README.md', async () => {
     expect((await find(t.athlete, 'x')).status).toBe(403);
     expect((await find(t.outsider, 'x')).status).toBe(404);
     expect((await find(t.anonymous, 'x')).status).toBe(401);

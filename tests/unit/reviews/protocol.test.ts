@@ -22,7 +22,7 @@ describe('protocol load → fraction of maximum', () => {
   });
 
   it('puts kg added on the reference athlete: (bw + added) / (bw + maxAdded)', () => {
-    // 70 kg climber who can hang +30 kg: +10 kg is 80 of 100 kg (SCORING.md §8 example: hangLoad 0.8 → +10 kg).
+    // 70 kg climber who can hang +30 kg: +10 kg is 80 of 100 kg (docs/scoring.md §8 example: hangLoad 0.8 → +10 kg).
     expect(protocolIntensity(load(10, 'kg-added', 70, 30))).toBeCloseTo(0.8, 12);
     // Assistance: a 20 kg pulley counterweight leaves 50 of 100 kg.
     expect(protocolIntensity(load(-20, 'kg-added', 70, 30))).toBeCloseTo(0.5, 12);

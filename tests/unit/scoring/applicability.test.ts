@@ -3,7 +3,7 @@ import fc from 'fast-check';
 import { explainApplicability, suggestApplicability, type ApplicabilityInput } from '@/lib/scoring/applicability';
 import { ScoringInputError } from '@/lib/scoring/errors';
 
-// All rules: SCORING.md §2 and its precise rules (our model).
+// All rules: docs/scoring.md §2 and its precise rules (our model).
 
 describe('suggestApplicability — population match', () => {
   it.each([

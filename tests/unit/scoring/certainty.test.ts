@@ -7,9 +7,9 @@ import { ScoringInputError } from '@/lib/scoring/errors';
 // rates down one level (serious) or two (very serious); rating up for large effect (+1 / +2),
 // dose-response (+1) and confounding that would reduce the effect (+1), only for evidence not
 // already rated down. The starts of case series, reports, expert opinion, animal and in-vitro
-// work and the "start ≤ 2" rule for upgrading are SCORING.md §1.
+// work and the "start ≤ 2" rule for upgrading are docs/scoring.md §1.
 
-describe('gradeCertainty — starting level by design (GRADE Handbook 2013; SCORING.md §1)', () => {
+describe('gradeCertainty — starting level by design (GRADE Handbook 2013; docs/scoring.md §1)', () => {
   it.each([
     ['meta-analysis', 4, 'high'],
     ['randomized', 4, 'high'],

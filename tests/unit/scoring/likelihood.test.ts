@@ -5,7 +5,7 @@ import { ScoringInputError } from '@/lib/scoring/errors';
 
 // Terms and edges: IPCC AR4 Working Group II likelihood scale; Mastrandrea et al. (2010), AR5
 // guidance note. A value on an edge belongs to the higher band and 0.99 is "virtually certain"
-// (SCORING.md §4 and precise rules; the IPCC text says "> 99 %").
+// (docs/scoring.md §4 and precise rules; the IPCC text says "> 99 %").
 describe('likelihood scale (IPCC AR4 WG II; Mastrandrea et al. 2010)', () => {
   it('lists the seven bands ascending, each from min (included) to the next min (excluded)', () => {
     expect(LIKELIHOOD_BANDS.map((b) => [b.term, b.min, b.max])).toEqual([

@@ -4,7 +4,7 @@ import { ScoringInputError } from '@/lib/scoring/errors';
 import type { Appraisal } from '@/lib/scoring/types';
 import { formatNumber } from '@/lib/scoring/format';
 
-// Model: SCORING.md §3 and precise rules (our model). Magnitudes: Cohen (1988) benchmarks for a
+// Model: docs/scoring.md §3 and precise rules (our model). Magnitudes: Cohen (1988) benchmarks for a
 // standardized mean difference, small 0.2 / medium 0.5 / large 0.8.
 
 const LN4 = Math.log(4);

@@ -5,7 +5,7 @@ import { scoreReview, type ReviewInput } from '@/lib/scoring/verdict';
 import { likelihoodTerm } from '@/lib/scoring/likelihood';
 import type { Appraisal } from '@/lib/scoring/types';
 
-// Properties the model must keep whatever the coach enters (issue 3; SCORING.md §3, §5).
+// Properties the model must keep whatever the coach enters (docs/scoring.md §3, §5).
 
 const certainty = fc.constantFrom('high', 'moderate', 'low', 'very-low' as const);
 const direction = fc.constantFrom('supports', 'against', 'neutral' as const);

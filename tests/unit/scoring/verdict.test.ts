@@ -3,7 +3,7 @@ import { scoreReview, type ReviewInput, type ReviewMechanismInput } from '@/lib/
 import { ScoringInputError } from '@/lib/scoring/errors';
 import type { Appraisal } from '@/lib/scoring/types';
 
-// Verdict table, evidence weight, ranking and shares: SCORING.md §5 and precise rules (our model).
+// Verdict table, evidence weight, ranking and shares: docs/scoring.md §5 and precise rules (our model).
 
 const LN4 = Math.log(4);
 const LN20 = Math.log(20);

@@ -193,7 +193,7 @@ describe("Cohen's kappa — published examples", () => {
   });
 });
 
-describe("Cohen's kappa — weights over categories (SCORING.md §7 precise rules)", () => {
+describe("Cohen's kappa — weights over categories (docs/scoring.md §7 precise rules)", () => {
   /** Independent textbook form: κ_w = 1 − Σ v_ij o_ij / Σ v_ij e_ij with disagreement v = 1 − w. */
   const weightedByHand = (r1: number[], r2: number[], scale: number[], kind: 'linear' | 'quadratic') => {
     const K = scale.length;

@@ -69,7 +69,7 @@ describe('logRiskRatio and logOddsRatio — 2×2 tables', () => {
     }
   });
 
-  it('add 0.5 to every cell when one cell is zero (continuity correction, SCORING.md precise rules)', () => {
+  it('add 0.5 to every cell when one cell is zero (continuity correction, docs/scoring.md)', () => {
     const rr = logRiskRatio({ a: 0, b: 10, c: 5, d: 5 });
     expect(rr.corrected).toBe(true);
     expect(rr.yi).toBeCloseTo(Math.log(0.5 / 11 / (5.5 / 11)), 14);

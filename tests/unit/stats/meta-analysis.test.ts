@@ -137,7 +137,7 @@ describe('Teacher expectancy (Raudenbush & Bryk 1985) — REML', () => {
   });
 });
 
-describe('metaAnalysis — rules of SCORING.md §6 and precise rules', () => {
+describe('metaAnalysis — rules of docs/scoring.md §6 and precise rules', () => {
   it('returns one study as it is', () => {
     const r = metaAnalysis([{ yi: 0.4, vi: 0.04 }], { method: 'REML' });
     expect(r).toMatchObject({ k: 1, estimate: 0.4, se: 0.2, Q: 0, df: 0, tau2: 0, I2: 0, weights: [100] });

@@ -25,7 +25,7 @@ describe('oneRepMax — Epley (1985) w·(1 + r/30); Brzycki (1993, JOPERD) w·36
     expect(Math.abs(oneRepMax(weight, reps, formula) - published)).toBeLessThanOrEqual(0.005);
   });
 
-  it('returns the weight itself for one repetition, with both formulas (SCORING.md precise rules)', () => {
+  it('returns the weight itself for one repetition, with both formulas (docs/scoring.md)', () => {
     expect(oneRepMax(142.5, 1, 'epley')).toBe(142.5);
     expect(oneRepMax(142.5, 1, 'brzycki')).toBe(142.5);
   });
@@ -60,7 +60,7 @@ describe('oneRepMax — Epley (1985) w·(1 + r/30); Brzycki (1993, JOPERD) w·36
   });
 });
 
-describe('hangLoad — total = (body weight + max added) × fraction; added = total − body weight (SCORING.md §8)', () => {
+describe('hangLoad — total = (body weight + max added) × fraction; added = total − body weight (docs/scoring.md §8)', () => {
   it.each([
     [{ bodyweight: 70, maxAddedLoad: 30, fraction: 0.8 }, 80, 10],
     [{ bodyweight: 70, maxAddedLoad: 30, fraction: 0.7 }, 70, 0],
@@ -83,7 +83,7 @@ describe('hangLoad — total = (body weight + max added) × fraction; added = to
   });
 });
 
-describe('weeklyTimeUnderLoad and sessionSpacingOk (SCORING.md precise rules)', () => {
+describe('weeklyTimeUnderLoad and sessionSpacingOk (docs/scoring.md)', () => {
   it('multiplies seconds × sets × sessions per day × days (default 7)', () => {
     expect(weeklyTimeUnderLoad({ secondsPerSet: 10, setsPerSession: 6, sessionsPerDay: 2 })).toBe(840);
     expect(weeklyTimeUnderLoad({ secondsPerSet: 40, setsPerSession: 3, sessionsPerDay: 1, daysPerWeek: 3 })).toBe(360);
