@@ -14,5 +14,8 @@ export default defineConfig({
     fileParallelism: false,
     testTimeout: 60_000,
     hookTimeout: 60_000,
+    // What the browser waits for arrives when the server gets to it: on a busy machine that can take
+    // seconds, so polls wait up to 20 s (they return as soon as the condition holds).
+    expect: { poll: { timeout: 20_000, interval: 100 } },
   },
 });

@@ -13,7 +13,9 @@ export function PublicHeader({ signedIn }: { signedIn: boolean }) {
           </LinkButton>
           {signedIn ? (
             <LinkButton href="/dashboard" variant="primary" size="sm">
-              Go to dashboard
+              {/* A phone's header row has room for the short form only. */}
+              <span className="sm:hidden">Dashboard</span>
+              <span className="hidden sm:inline">Go to dashboard</span>
             </LinkButton>
           ) : (
             <>

@@ -78,7 +78,7 @@ async function scoreAndSubmit(context: BrowserContext, email: string, link: stri
   }
   await page.fill(`#comment-${mechanismIds[1]}`, `Tendon view from ${email.split('.')[0]}.`);
   await page.locator('input[name="signOff"][value="approve"]').check({ force: true });
-  await expect.poll(() => page.getByText(/Draft saved/).isVisible(), { timeout: 10_000 }).toBe(true);
+  await expect.poll(() => page.getByText(/Draft saved/).isVisible()).toBe(true);
   if (shots) {
     await page.screenshot({ path: `${SHOTS}/rounds-scorecard-1280.png`, fullPage: true });
     await page.setViewportSize({ width: 375, height: 800 });
@@ -87,7 +87,7 @@ async function scoreAndSubmit(context: BrowserContext, email: string, link: stri
   }
   await page.getByRole('button', { name: 'Submit scorecard' }).click();
   await page.getByRole('button', { name: 'Yes, submit' }).click();
-  await expect.poll(() => page.getByText('Your scores are final.').isVisible(), { timeout: 10_000 }).toBe(true);
+  await expect.poll(() => page.getByText('Your scores are final.').isVisible()).toBe(true);
   return page;
 }
 
@@ -137,7 +137,7 @@ describe('a blind peer-review round from opening to approval', () => {
     await author.getByLabel(people.second.name, { exact: false }).check();
     await author.getByRole('button', { name: 'Open round and send invitations' }).click();
     await expect
-      .poll(() => author.getByText('Round opened and invitations sent.').isVisible(), { timeout: 10_000 })
+      .poll(() => author.getByText('Round opened and invitations sent.').isVisible())
       .toBe(true);
 
     const mailFirst = await waitForMail(
@@ -175,11 +175,13 @@ describe('a blind peer-review round from opening to approval', () => {
       .getByLabel('Why it stays as it is')
       .fill('The tendon evidence is thin either way; noted both readings in the text.');
     await flagged.getByRole('button', { name: 'Record resolution' }).click();
-    await expect.poll(() => flagged.getByText('Flag resolved').isVisible(), { timeout: 10_000 }).toBe(true);
+    await expect.poll(() => flagged.getByText('Flag resolved').isVisible()).toBe(true);
 
+    // Closing asks first (it cannot be undone).
+    author.once('dialog', (dialog) => void dialog.accept());
     await author.getByRole('button', { name: 'Close the round' }).click();
     await expect
-      .poll(() => author.getByText('Round closed: the review is now approved.').isVisible(), { timeout: 10_000 })
+      .poll(() => author.getByText('Round closed: the review is now approved.').isVisible())
       .toBe(true);
     const review = await author.request.get(`/api/reviews/${reviewId}`);
     expect((await review.json()).review.status).toBe('approved');

@@ -40,7 +40,8 @@ describe('security headers', () => {
     // React really ran (a client component answered a click would fail without its scripts).
     expect(await page.evaluate(() => typeof (window as unknown as { next?: unknown }).next)).toBe('object');
     await context.close();
-  });
+    // Twelve pages, each until the network is idle: minutes on a busy machine.
+  }, 180_000);
 
   it('sends the headers on pages, API answers and files', async () => {
     for (const path of ['/', '/sign-in', '/api/verdicts', '/v/no-such-verdict', '/favicon.ico']) {

@@ -110,9 +110,9 @@ describe('publishing a verdict to a following athlete', () => {
     await athlete.goto('/verdicts');
     await athlete.getByLabel('Search the verdicts').fill('sawna pulleys');
     const hit = athlete.getByRole('link', { name: claim });
-    await expect.poll(() => hit.isVisible(), { timeout: 10_000 }).toBe(true);
+    await expect.poll(() => hit.isVisible()).toBe(true);
     // The list shows newest first until the search answers; the highlighted words mark the answer.
-    await expect.poll(() => athlete.locator('mark').first().isVisible(), { timeout: 10_000 }).toBe(true);
+    await expect.poll(() => athlete.locator('mark').first().isVisible()).toBe(true);
     await athlete.screenshot({ path: '/tmp/verdict-search-phone.png', fullPage: true });
     await hit.click();
     await athlete.waitForURL(`**/v/${slug}`);
