@@ -3,6 +3,7 @@ import { EmptyState } from '@/components/ui/EmptyState';
 import { VerdictChip } from '@/components/verdict/VerdictChip';
 import { longDate } from '@/components/verdict-page/labels';
 import type { VerdictListItemDTO } from '@/lib/publishing/types';
+import { VerdictPageLink } from '@/components/verdict-page/VerdictPageLink';
 
 /** The dashboard of someone who reads verdicts rather than writes reviews: the latest few. */
 export function LatestVerdicts({ verdicts }: { verdicts: readonly VerdictListItemDTO[] }) {
@@ -29,9 +30,9 @@ export function LatestVerdicts({ verdicts }: { verdicts: readonly VerdictListIte
                 </span>
               </div>
               <h3 className="mt-2 font-semibold">
-                <Link href={`/v/${v.slug}`} className="hover:underline">
+                <VerdictPageLink slug={v.slug} className="hover:underline">
                   {v.claim}
-                </Link>
+                </VerdictPageLink>
               </h3>
             </li>
           ))}

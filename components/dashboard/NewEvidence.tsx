@@ -5,6 +5,7 @@ import { useState } from 'react';
 import { Button } from '@/components/ui/Button';
 import { apiFetch, errorMessage } from '@/lib/swr/fetcher';
 import type { SuggestionDTO } from '@/lib/watch/types';
+import { VerdictPageLink } from '@/components/verdict-page/VerdictPageLink';
 
 /**
  * "New evidence to consider": library studies the evidence watch found close to a mechanism of a
@@ -47,9 +48,9 @@ export function NewEvidence({ items: initial }: { items: SuggestionDTO[] }) {
             </p>
             <p>
               For “{s.mechanism}” in{' '}
-              <Link href={`/v/${s.slug}`} className="prose-link">
+              <VerdictPageLink slug={s.slug} className="prose-link">
                 {s.verdictTitle}
-              </Link>
+              </VerdictPageLink>
             </p>
             <p className="text-ink-muted">{s.reason}</p>
             <Button size="sm" variant="secondary" onClick={() => dismiss(s.id)}>

@@ -16,9 +16,14 @@ export function LogoMark({ className = 'size-8' }: { className?: string }) {
 
 export function Logo({ href = '/' }: { href?: string }) {
   return (
-    <Link href={href} className="group inline-flex items-center gap-2.5 rounded-md" aria-label="Loadbearing, home">
+    <Link
+      href={href}
+      className="group inline-flex items-center gap-2 rounded-md sm:gap-2.5"
+      aria-label="Loadbearing, home"
+    >
       <LogoMark />
-      <span className="font-display text-ink group-hover:text-brand text-xl font-semibold tracking-tight">
+      {/* On the narrowest phones the mark alone leaves the header row room for its buttons. */}
+      <span className="font-display text-ink group-hover:text-brand text-lg font-semibold tracking-tight max-[359px]:hidden sm:text-xl">
         Loadbearing
       </span>
     </Link>

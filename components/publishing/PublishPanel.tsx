@@ -1,12 +1,12 @@
 'use client';
 
-import Link from 'next/link';
 import { useId, useState, type FormEvent } from 'react';
 import { Button } from '@/components/ui/Button';
 import type { PublishResultDTO, Visibility } from '@/lib/publishing/types';
 import { ApiError, apiFetch, errorMessage } from '@/lib/swr/fetcher';
 import { keys } from '@/lib/swr/keys';
 import { usePublication } from '@/lib/swr/use-publication';
+import { VerdictPageLink } from '@/components/verdict-page/VerdictPageLink';
 
 interface PublicationState {
   publication: {
@@ -91,9 +91,9 @@ export function PublishPanel({ reviewId }: { reviewId: number }) {
       {pub && (
         <p className="text-sm">
           Version {pub.latestNumber} is published{pub.withdrawn ? ' but withdrawn' : ''}:{' '}
-          <Link className="prose-link" href={`/v/${pub.slug}`}>
+          <VerdictPageLink slug={pub.slug} className="prose-link">
             /v/{pub.slug}
-          </Link>
+          </VerdictPageLink>
         </p>
       )}
       {data && !mayPublish && (

@@ -1,6 +1,5 @@
 'use client';
 
-import Link from 'next/link';
 import { useDeferredValue, useId, useState } from 'react';
 import { Badge } from '@/components/ui/Badge';
 import { EmptyState } from '@/components/ui/EmptyState';
@@ -10,6 +9,7 @@ import type { VerdictListItemDTO } from '@/lib/publishing/types';
 import { errorMessage } from '@/lib/swr/fetcher';
 import { useVerdictSearch } from '@/lib/swr/use-search';
 import { Highlight } from './Highlight';
+import { VerdictPageLink } from '@/components/verdict-page/VerdictPageLink';
 
 /**
  * The athlete's list of published verdicts, newest first, with a fuzzy search box (GET
@@ -68,9 +68,9 @@ export function VerdictSearch({
                 </span>
               </div>
               <h2 className="mt-2 text-lg font-semibold">
-                <Link href={`/v/${v.slug}`} className="hover:underline">
+                <VerdictPageLink slug={v.slug} className="hover:underline">
                   <Highlight text={v.claim} field="item.claim" matches={v.matches} />
-                </Link>
+                </VerdictPageLink>
               </h2>
               {v.title !== v.claim && (
                 <p className="text-ink-muted text-sm">

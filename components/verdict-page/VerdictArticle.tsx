@@ -9,6 +9,7 @@ import { MechanismRanking } from './MechanismRanking';
 import { ProtocolPlain } from './ProtocolPlain';
 import { ReferenceList } from './ReferenceList';
 import { VerdictFirmness } from './VerdictFirmness';
+import { VerdictPageLink } from '@/components/verdict-page/VerdictPageLink';
 
 /** Section headings share one look; each section is labelled by its heading for landmark navigation. */
 function Section({ id, title, children }: { id: string; title: string; children: React.ReactNode }) {
@@ -42,9 +43,9 @@ export function VerdictArticle({ page, latest }: { page: VerdictPageDTO; latest:
       {!latest && (
         <div role="note" className="border-warning-100 bg-warning-50 text-warning-800 rounded-lg border px-4 py-3">
           You are reading version {page.version.number}, an earlier version.{' '}
-          <Link className="font-semibold underline" href={`/v/${page.slug}`}>
+          <VerdictPageLink slug={page.slug} className="font-semibold underline">
             Read the current version ({page.latestNumber})
-          </Link>
+          </VerdictPageLink>
           .
         </div>
       )}

@@ -1,6 +1,7 @@
 import Link from 'next/link';
 import type { VerdictPageDTO } from '@/lib/publishing/types';
 import { longDate } from './labels';
+import { VerdictPageLink } from '@/components/verdict-page/VerdictPageLink';
 
 /** Every version of a verdict, newest first, with what changed and a link to read it as it was. */
 export function VersionList({ page }: { page: VerdictPageDTO }) {
@@ -10,9 +11,9 @@ export function VersionList({ page }: { page: VerdictPageDTO }) {
         <p className="text-ink-muted text-sm font-semibold">Versions of a verdict by {page.snapshot.team.name}</p>
         <h1 className="text-3xl font-semibold">{page.snapshot.claim}</h1>
         <p>
-          <Link className="prose-link" href={`/v/${page.slug}`}>
+          <VerdictPageLink slug={page.slug} className="prose-link">
             Back to the current verdict
-          </Link>
+          </VerdictPageLink>
         </p>
       </header>
       {page.withdrawn && (

@@ -8,6 +8,7 @@ import { Button } from '@/components/ui/Button';
 import { Card, CardBody, CardHeader } from '@/components/ui/Card';
 import { apiFetch, errorMessage, fetcher } from '@/lib/swr/fetcher';
 import type { EvidenceFlagDTO, WatchRunDTO } from '@/lib/watch/types';
+import { VerdictPageLink } from '@/components/verdict-page/VerdictPageLink';
 
 type Status = { run: WatchRunDTO | null; flags: EvidenceFlagDTO[] };
 
@@ -75,9 +76,9 @@ export function EvidenceWatchPanel({ teamId, canRun }: { teamId: number; canRun:
                       <span className="bg-danger-50 text-danger-800 rounded px-1.5 text-xs font-semibold uppercase">
                         Evidence changed
                       </span>
-                      <Link href={`/v/${f.slug}`} className="text-brand font-semibold hover:underline">
+                      <VerdictPageLink slug={f.slug} className="text-brand font-semibold hover:underline">
                         {f.title}
-                      </Link>
+                      </VerdictPageLink>
                       <span className="text-ink-muted">version {f.versionNumber}</span>
                     </p>
                     <p className="mt-1">
