@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, inject } from 'vitest';
-import { chromium, type Browser, type BrowserContext } from 'playwright-core';
+import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
 import { readDropInbox } from '../../lib/mail/inbox';
 import type { ReceivedMail } from '../../lib/mail/fake-smtp';
 
@@ -53,4 +53,16 @@ export function linkFrom(mail: ReceivedMail, pathPrefix: string): string {
   const match = mail.text.match(new RegExp(`https?://\\S+${pathPrefix.replace(/[/]/g, '\\/')}\\S*`));
   if (!match) throw new Error(`No ${pathPrefix} link in mail "${mail.subject}"`);
   return match[0];
+}
+
+/** Every demo account's password (demo data only). */
+export const DEMO_PASSWORD = 'loadbearing-demo';
+
+/** Signs in through the form, as a person would, and waits for the dashboard. */
+export async function signInWithForm(page: Page, email: string, password = DEMO_PASSWORD): Promise<void> {
+  await page.goto('/sign-in');
+  await page.fill('input[name=email]', email);
+  await page.fill('input[name=password]', password);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await page.waitForURL('**/dashboard');
 }

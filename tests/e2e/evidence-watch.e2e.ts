@@ -1,18 +1,9 @@
-import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
-import { useBrowser, waitForMail } from './browser';
+import { signInWithForm, useBrowser, waitForMail } from './browser';
 
 const browser = useBrowser();
-const DEMO_PASSWORD = 'loadbearing-demo';
 const PHONE = { width: 390, height: 844 };
 
-async function signIn(page: Page, email: string) {
-  await page.goto('/sign-in');
-  await page.fill('input[name=email]', email);
-  await page.fill('input[name=password]', DEMO_PASSWORD);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.waitForURL('**/dashboard');
-}
 
 describe('the evidence watch', () => {
   it('the owner runs it and sees the flagged verdict; the athlete’s page says a cited study changed; the author gets the mail', async () => {
@@ -20,7 +11,7 @@ describe('the evidence watch', () => {
     // ladder verdict was corrected; the seed has not applied that yet.
     const ownerContext = await browser.newContext();
     const owner = await ownerContext.newPage();
-    await signIn(owner, 'owner@granite-hollow.test');
+    await signInWithForm(owner, 'owner@granite-hollow.test');
     await owner.goto('/library');
     const panel = owner.getByTestId('evidence-watch');
     await panel.getByRole('button', { name: 'Check the library now' }).click();
@@ -45,7 +36,7 @@ describe('the evidence watch', () => {
     // A team athlete on a phone reads the notice above the verdict.
     const athleteContext = await browser.newContext({ viewport: PHONE });
     const athlete = await athleteContext.newPage();
-    await signIn(athlete, 'athlete@granite-hollow.test');
+    await signInWithForm(athlete, 'athlete@granite-hollow.test');
     await athlete.goto('/v/weighted-pull-up-ladder');
     const notice = athlete.getByTestId('evidence-changed');
     expect(await notice.textContent()).toMatch(/was corrected on 27 Nov 2026[\s\S]*re-reviewing/);

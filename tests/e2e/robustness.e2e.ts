@@ -1,6 +1,5 @@
-import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
-import { useBrowser } from './browser';
+import { signInWithForm, useBrowser } from './browser';
 
 // What a verdict hangs on (docs/scoring.md §9): the coach's "How solid is this?" beside the
 // workbench, and the athlete's plain words on the published page (no JavaScript there).
@@ -9,19 +8,11 @@ const browser = useBrowser();
 const PHONE = { width: 390, height: 844 };
 const CLAIM_TITLE = 'Cold plunges after strength sessions';
 
-async function signIn(page: Page, email: string) {
-  await page.goto('/sign-in');
-  await page.fill('input[name=email]', email);
-  await page.fill('input[name=password]', 'loadbearing-demo');
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.waitForURL('**/dashboard');
-}
-
 describe('how solid a verdict is', () => {
   it('the coach reads what the verdict hangs on, reaches every dot of the chart with the keyboard, and has the chart as a table', async () => {
     const context = await browser.newContext();
     const page = await context.newPage();
-    await signIn(page, 'coach2@granite-hollow.test');
+    await signInWithForm(page, 'coach2@granite-hollow.test');
     const { reviews } = await (await page.request.get('/api/reviews')).json();
     const review = reviews.find((r: { title: string }) => r.title === CLAIM_TITLE);
     const verdict = await (await page.request.get(`/api/reviews/${review.id}/verdict`)).json();
@@ -58,7 +49,7 @@ describe('how solid a verdict is', () => {
   it('fits a phone, and the athlete reads in plain words what the published verdict rests on', async () => {
     const context = await browser.newContext({ viewport: PHONE });
     const page = await context.newPage();
-    await signIn(page, 'coach2@granite-hollow.test');
+    await signInWithForm(page, 'coach2@granite-hollow.test');
     const { reviews } = await (await page.request.get('/api/reviews')).json();
     const review = reviews.find((r: { title: string }) => r.title === CLAIM_TITLE);
     await page.goto(`/reviews/${review.id}`);

@@ -2,21 +2,13 @@ import axe from 'axe-core';
 import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 import { markApproved } from './approve';
-import { linkFrom, useBrowser, waitForMail } from './browser';
+import { linkFrom, signInWithForm, useBrowser, waitForMail } from './browser';
 
 const browser = useBrowser();
-const DEMO_PASSWORD = 'loadbearing-demo';
 // Unique to this file: no other journey signs in as the second demo athlete.
 const ATHLETE = 'athlete2@granite-hollow.test';
 const PHONE = { width: 375, height: 812 };
 
-async function signIn(page: Page, email: string) {
-  await page.goto('/sign-in');
-  await page.fill('input[name=email]', email);
-  await page.fill('input[name=password]', DEMO_PASSWORD);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.waitForURL('**/dashboard');
-}
 
 async function seriousAxeViolations(page: Page) {
   // Evaluated, not added as a <script>: the verdict page's policy lets no script tag run.
@@ -34,7 +26,7 @@ describe('publishing a verdict to a following athlete', () => {
     // The athlete follows the team from their verdicts page.
     const athleteContext = await browser.newContext({ viewport: PHONE });
     const athlete = await athleteContext.newPage();
-    await signIn(athlete, ATHLETE);
+    await signInWithForm(athlete, ATHLETE);
     await athlete.goto('/verdicts');
     // Every section of the app's navigation fits the phone's row: none hides off-screen.
     const nav = athlete.getByRole('navigation', { name: 'Main' }).locator('ul').last();
@@ -45,7 +37,7 @@ describe('publishing a verdict to a following athlete', () => {
     // The owner writes a review, it is approved, and the owner publishes it for the team.
     const ownerContext = await browser.newContext();
     const owner = await ownerContext.newPage();
-    await signIn(owner, 'owner@granite-hollow.test');
+    await signInWithForm(owner, 'owner@granite-hollow.test');
     const me = await (await owner.request.get('/api/me')).json();
     const teamId = me.teams.find((t: { slug: string }) => t.slug === 'granite-hollow').id;
     const claim = 'Sauna sessions after bouldering thicken finger pulleys within a month.';
