@@ -1,7 +1,7 @@
 import { createServer, type Server } from 'node:http';
-import type { AddressInfo } from 'node:net';
 import type { NoticeKind } from '@/lib/watch/notices';
 import { demoReference } from './demo-records';
+import { listenOnLoopback } from './listen';
 
 /**
  * A local stand-in for the Crossref REST API's `/works/{doi}`, for tests, benches and `npm run
@@ -143,14 +143,10 @@ export async function startFakeCrossrefServer(options: { port?: number } = {}): 
       res.writeHead(200, { 'content-type': 'application/json' }).end(JSON.stringify(work(doi, state.notices)));
     });
   });
-  await new Promise<void>((resolve, reject) => {
-    server.once('error', reject);
-    server.listen(options.port ?? 0, '127.0.0.1', () => resolve());
-  });
-  const { port } = server.address() as AddressInfo;
+  const { port, url } = await listenOnLoopback(server, options.port);
   return {
     port,
-    url: `http://127.0.0.1:${port}`,
+    url,
     get requests() {
       return state.requests;
     },

@@ -1,7 +1,7 @@
 import { createServer, type Server } from 'node:http';
-import type { AddressInfo } from 'node:net';
 import { CSL_JSON_MEDIA_TYPE } from './doi';
 import { demoReference } from './demo-records';
+import { listenOnLoopback } from './listen';
 
 /**
  * A local stand-in for the DOI content-negotiation service, for tests and `npm run dev`: it
@@ -57,14 +57,10 @@ export async function startFakeDoiServer(options: { port?: number } = {}): Promi
     }
     res.writeHead(200, { 'content-type': CSL_JSON_MEDIA_TYPE }).end(JSON.stringify(record));
   });
-  await new Promise<void>((resolve, reject) => {
-    server.once('error', reject);
-    server.listen(options.port ?? 0, '127.0.0.1', () => resolve());
-  });
-  const { port } = server.address() as AddressInfo;
+  const { port, url } = await listenOnLoopback(server, options.port);
   return {
     port,
-    url: `http://127.0.0.1:${port}`,
+    url,
     get requests() {
       return state.requests;
     },
