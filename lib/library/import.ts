@@ -233,7 +233,9 @@ export async function importSource(
     ...[...added.values()].map((row) => toStudyDTO(row)),
     ...matchedRows.map((row) => toStudyDTO(row, counts.get(row.id))),
   ];
-  // Each study's suggested design is read once, by toStudyDTO, and the results repeat it.
+  // Each study's suggested design is read once, by toStudyDTO, and the results repeat it: an
+  // added study's on its own result, a library study's on the duplicates of it (a repeat
+  // within the import points at the earlier entry, which carries it).
   const suggested = new Map(
     studies.map((dto): [number, Pick<ImportResultDTO, 'suggestedDesign'>] => [
       dto.id,
@@ -245,7 +247,7 @@ export async function importSource(
   return {
     results: results.map((r, index) =>
       r
-        ? { ...r, ...(r.status === 'duplicate' && r.studyId ? suggested.get(r.studyId) : {}) }
+        ? { ...r, ...(r.status === 'duplicate' && r.studyId && matched.has(r.studyId) ? suggested.get(r.studyId) : {}) }
         : { index, title: null, status: 'failed', reason: 'Not processed.' },
     ),
     studies,

@@ -196,6 +196,25 @@ describe('POST /api/studies/import — a real-world-shaped .bib file', () => {
     expect(listed.suggestedDesign).toBe('randomized');
   });
 
+  it('offers a design on the added entry, not on a repeat of it later in the same file', async () => {
+    const team = await makeTeam('rp');
+    const entry = (key: string) =>
+      `@article{${key},\n  author = {Vale, Jonah},\n  title = {Hangboard loading in trained climbers: a randomised controlled trial},\n` +
+      `  journal = {Hollowridge Journal of Training Science},\n  year = {2023},\n  doi = {10.5555/repeat.1}\n}\n`;
+    const res = await sendForm(team.coach, importRoute.POST, {
+      fields: { teamId: String(team.teamId) },
+      file: {
+        name: 'repeat.bib',
+        type: 'application/x-bibtex',
+        bytes: new TextEncoder().encode(entry('a') + entry('b')),
+      },
+    });
+    const [first, repeat] = res.body.results;
+    expect(first).toMatchObject({ status: 'added', suggestedDesign: 'randomized' });
+    expect(repeat).toMatchObject({ status: 'duplicate', studyId: first.studyId });
+    expect(repeat.suggestedDesign).toBeUndefined();
+  });
+
   it('answers a second import of the same file with duplicates and adds nothing', async () => {
     const team = await makeTeam('rw2');
     const send = () =>
