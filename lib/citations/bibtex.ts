@@ -75,11 +75,12 @@ function fallbackTitle(chunk: Chunk): string | null {
  * as "MVC-Based" keep their capitals), and none the raw BibTeX protected with braces.
  */
 export function lowerHyphenatedParts(title: string, rawTitle: string | null): string {
-  if (rawTitle === null) return title;
-  const protectedText = [...rawTitle.matchAll(/\{([^{}]*)\}/g)].map((m) => m[1]).join(' ');
+  if (rawTitle === null || !title.includes('-')) return title;
+  let protectedText: string | undefined;
   return title.replace(
     /(?<![\p{L}-])(\p{L}\p{Ll}*)((?:-\p{L}\p{Ll}*)+)(?![\p{L}-])/gu,
     (whole: string, first: string, rest: string, offset: number) => {
+      protectedText ??= [...rawTitle.matchAll(/\{([^{}]*)\}/g)].map((m) => m[1]).join(' ');
       if (protectedText.includes(whole)) return whole;
       const startsSentence = offset === 0 || /[:.?!]\s*$/.test(title.slice(0, offset));
       return `${startsSentence ? first : first.toLowerCase()}${rest.toLowerCase()}`;
@@ -221,16 +222,18 @@ export function bibtexEntries(text: string): (() => ParsedEntry)[] {
 
   return works.map(({ chunk }, index) => () => {
     const where = at('BibTeX entry', chunk.line);
-    const title = fallbackTitle(chunk);
     const entry = complete[index];
-    if (entry instanceof Error) return failure(index, title, where, entry);
+    if (entry instanceof Error) return failure(index, fallbackTitle(chunk), where, entry);
     if (!decoded.has(index)) decodeBatch(index);
     const item = decoded.get(index)!;
     decoded.delete(index);
-    if (item instanceof Error) return failure(index, title, where, item);
-    const parsed = accept(index, item, title, where);
-    if (parsed.kind === 'parsed')
-      parsed.csl.title = lowerHyphenatedParts(parsed.csl.title as string, rawBibtexTitle(chunk.text));
+    if (item instanceof Error) return failure(index, fallbackTitle(chunk), where, item);
+    // The title typed in the file is read only when it is needed: for a failure, or a hyphen.
+    const parsed = accept(index, item, null, where);
+    if (parsed.kind === 'failed') return { ...parsed, title: fallbackTitle(chunk) };
+    if (parsed.kind !== 'parsed') return parsed;
+    const title = parsed.csl.title as string;
+    if (title.includes('-')) parsed.csl.title = lowerHyphenatedParts(title, rawBibtexTitle(chunk.text));
     return parsed;
   });
 }

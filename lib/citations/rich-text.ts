@@ -72,14 +72,25 @@ const NAME_PARTS = ['family', 'given', 'literal', 'suffix', 'dropping-particle',
 const tidy = (value: string) => value.replace(/\s+/g, ' ').trim();
 
 /**
+ * Below U+0300 no character has a combining mark or a decomposition that NFC would change (the
+ * combining marks start at U+0300, the singletons NFC replaces — Ω, Å, ; … — lie above it:
+ * UAX #15 and the Unicode Character Database's DerivedNormalizationProps), so text made of such
+ * characters only is already composed. Most names and titles are; skipping them spares ICU a
+ * call per field.
+ */
+const MAY_NEED_COMPOSING = /[^\u0000-\u02ff]/;
+
+/**
  * Accents composed: `{\"\i}` decodes to a dotless ı plus a combining diaeresis, which is an ï once
  * the dotless letter is undone (Unicode normalization form C, UAX #15).
  */
 const compose = (value: string) =>
-  value
-    .replace(/ı(?=[\u0300-\u036f])/g, 'i')
-    .replace(/ȷ(?=[\u0300-\u036f])/g, 'j')
-    .normalize('NFC');
+  MAY_NEED_COMPOSING.test(value)
+    ? value
+        .replace(/ı(?=[\u0300-\u036f])/g, 'i')
+        .replace(/ȷ(?=[\u0300-\u036f])/g, 'j')
+        .normalize('NFC')
+    : value;
 
 /**
  * The item with every text field and name part as plain text (whitespace folded too), and the

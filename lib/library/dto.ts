@@ -1,9 +1,9 @@
 import { suggestDesign } from '@/lib/citations/design';
-import type { Study } from '@/models';
 import type { EffectDataDTO, StudyDTO, StudyDesign, TrainingStatus } from '@/lib/reviews/types';
+import type { StudyRow } from './import-insert';
 
 /** A library row as the routes send it. `appraisalCount` comes from a grouped count the caller ran. */
-export function toStudyDTO(study: Study, appraisalCount = 0): StudyDTO {
+export function toStudyDTO(study: StudyRow, appraisalCount = 0): StudyDTO {
   return {
     id: study.id,
     teamId: study.teamId,

@@ -2,7 +2,6 @@ import { Op } from 'sequelize';
 import { AppError } from '@/lib/api/errors';
 import { recordEvent } from '@/lib/audit/record';
 import type { CslItem } from '@/lib/citations/csl';
-import { suggestDesign } from '@/lib/citations/design';
 import { lookupDoi, type DoiLookup } from '@/lib/citations/doi';
 import { formatFromFilename, splitSource, type ParsedEntry, type SourceFormat } from '@/lib/citations/parse';
 import { uniqueOrConflict, writeTransaction } from '@/lib/reviews/transaction';
@@ -10,7 +9,9 @@ import type { ImportResultDTO, StudyDTO } from '@/lib/reviews/types';
 import type { StudyMetaInput } from '@/lib/validation/studies';
 import { Study } from '@/models';
 import { referenceColumns } from './columns';
-import { newStudyRow, studiesDTO } from './studies';
+import { toStudyDTO } from './dto';
+import { insertStudies, type StudyRow } from './import-insert';
+import { appraisalCounts, newStudyRow } from './studies';
 
 /**
  * Bringing references into a team's library from pasted text or an uploaded file: parse
@@ -176,7 +177,7 @@ export async function importSource(
   }
 
   // 4. Add the new ones, a chunk per transaction: a chunk is saved whole or not at all.
-  const added = new Map<number, Study>();
+  const added = new Map<number, StudyRow>();
   for (let i = 0; i < toAdd.length; i += INSERT_BATCH) {
     const batch = toAdd.slice(i, i + INSERT_BATCH);
     try {
@@ -184,9 +185,9 @@ export async function importSource(
         'Another import added some of these studies at the same moment; import again to see which are new.',
         () =>
           writeTransaction(async (transaction) => {
-            const rows = await Study.bulkCreate(
+            const rows = await insertStudies(
               batch.map((p) => newStudyRow(teamId, userId, p.csl, options.meta ?? {}, p.columns)),
-              { transaction, hooks: false, validate: false },
+              transaction,
             );
             rows.forEach((row, j) => added.set(batch[j].index, row));
           }),
@@ -208,8 +209,6 @@ export async function importSource(
       subjectType: 'study',
       data: { format: split.format, entries: total, added: added.size },
     });
-  for (const [index, study] of added)
-    results[index] = { index, title: study.title, status: 'added', studyId: study.id, ...suggestion(study) };
   for (const r of repeats) {
     const first = added.get(r.firstIndex);
     results[r.index] = first
@@ -224,27 +223,36 @@ export async function importSource(
   }
   progress({ phase: 'done', done: total, total });
 
-  // The matches were loaded with a few columns only; the response sends them whole.
+  // The matches were loaded with a few columns only; the response sends them whole. Only they
+  // can have appraisals: the added studies did not exist until this request.
   const matchedRows = await inChunks([...matched], QUERY_CHUNK, (chunk) =>
     Study.findAll({ where: { id: { [Op.in]: chunk } } }),
   );
-  const suggested = new Map(matchedRows.map((row) => [row.id, suggestion(row)]));
-  const studies = await studiesDTO([...added.values(), ...matchedRows]);
+  const counts = await appraisalCounts(matchedRows.map((row) => row.id));
+  const studies = [
+    ...[...added.values()].map((row) => toStudyDTO(row)),
+    ...matchedRows.map((row) => toStudyDTO(row, counts.get(row.id))),
+  ];
+  // Each study's suggested design is read once, by toStudyDTO, and the results repeat it: an
+  // added study's on its own result, a library study's on the duplicates of it (a repeat
+  // within the import points at the earlier entry, which carries it).
+  const suggested = new Map(
+    studies.map((dto): [number, Pick<ImportResultDTO, 'suggestedDesign'>] => [
+      dto.id,
+      dto.suggestedDesign ? { suggestedDesign: dto.suggestedDesign } : {},
+    ]),
+  );
+  for (const [index, study] of added)
+    results[index] = { index, title: study.title, status: 'added', studyId: study.id, ...suggested.get(study.id) };
   return {
     results: results.map((r, index) =>
       r
-        ? { ...r, ...(r.status === 'duplicate' && r.studyId ? suggested.get(r.studyId) : {}) }
+        ? { ...r, ...(r.status === 'duplicate' && r.studyId && matched.has(r.studyId) ? suggested.get(r.studyId) : {}) }
         : { index, title: null, status: 'failed', reason: 'Not processed.' },
     ),
     studies,
     format: split.format,
   };
-}
-
-/** The design a study's title or keywords name, while it has none (the coach confirms it). */
-function suggestion(study: Study): Pick<ImportResultDTO, 'suggestedDesign'> {
-  const design = study.design ? null : suggestDesign(study.csl);
-  return design ? { suggestedDesign: design } : {};
 }
 
 /** POST /api/studies/import: the uploaded file's text, its format from the file name. */

@@ -1,6 +1,7 @@
 import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
+import * as oneStudy from '@/app/api/studies/[id]/route';
 import * as importRoute from '@/app/api/studies/import/route';
 import { Study } from '@/models';
 import { useTestApp } from '../../helpers/app';
@@ -31,6 +32,32 @@ describe('POST /api/studies/import — a .bib, .ris or .json file', () => {
       'failed',
     ]);
     expect(res.body.studies).toHaveLength(4);
+  });
+
+  // The chunks are written as plain rows, not through the model: they must read back the same.
+  it('answers with each added study as the library then reads it', async () => {
+    const team = await makeTeam('rb');
+    const res = await sendForm(team.coach, importRoute.POST, {
+      fields: { teamId: String(team.teamId) },
+      file: { name: 'library.bib', type: 'application/x-bibtex', bytes: bytes('library.bib') },
+    });
+    expect(res.status).toBe(201);
+    const added = (res.body.results as { status: string; studyId?: number; title: string }[]).filter(
+      (r) => r.status === 'added',
+    );
+    expect(added).toHaveLength(4);
+    for (const result of added) {
+      const answered = res.body.studies.find((s: { id: number }) => s.id === result.studyId);
+      expect(answered.title).toBe(result.title);
+      const read = await team.coach.call(oneStudy.GET, { params: { id: String(result.studyId) } });
+      expect(read.status).toBe(200);
+      expect(read.body.study).toEqual(answered);
+    }
+    const row = await Study.findByPk(added[0].studyId);
+    expect(row!.createdAt.getTime()).toBe(new Date(res.body.studies[0].createdAt).getTime());
+    expect(row!.tags).toEqual([]);
+    expect(row!.injured).toBe(false);
+    expect(row!.evidenceNotice).toBeNull();
   });
 
   it('imports RIS and CSL-JSON files by their extension', async () => {
@@ -126,6 +153,11 @@ describe('POST /api/studies/import — a .bib, .ris or .json file', () => {
     expect(result.results.filter((r: { status: string }) => r.status === 'added')).toHaveLength(2000);
     expect(lines.filter((l) => l.type === 'progress').length).toBeGreaterThan(3);
     expect(await Study.count({ where: { teamId: t.teamId, doi: '10.5555/gen.1999' } })).toBe(1);
+    // Each result names the study its own entry became, in every chunk of 500.
+    for (const i of [0, 499, 500, 1234, 1999]) {
+      const row = await Study.findByPk(result.results[i].studyId);
+      expect(row!.doi).toBe(`10.5555/gen.${i}`);
+    }
   });
 });
 
@@ -162,6 +194,25 @@ describe('POST /api/studies/import — a real-world-shaped .bib file', () => {
     // The library list carries the suggestion too, until a design is confirmed.
     const listed = res.body.studies.find((s: { id: number }) => s.id === results[2].studyId);
     expect(listed.suggestedDesign).toBe('randomized');
+  });
+
+  it('offers a design on the added entry, not on a repeat of it later in the same file', async () => {
+    const team = await makeTeam('rp');
+    const entry = (key: string) =>
+      `@article{${key},\n  author = {Vale, Jonah},\n  title = {Hangboard loading in trained climbers: a randomised controlled trial},\n` +
+      `  journal = {Hollowridge Journal of Training Science},\n  year = {2023},\n  doi = {10.5555/repeat.1}\n}\n`;
+    const res = await sendForm(team.coach, importRoute.POST, {
+      fields: { teamId: String(team.teamId) },
+      file: {
+        name: 'repeat.bib',
+        type: 'application/x-bibtex',
+        bytes: new TextEncoder().encode(entry('a') + entry('b')),
+      },
+    });
+    const [first, repeat] = res.body.results;
+    expect(first).toMatchObject({ status: 'added', suggestedDesign: 'randomized' });
+    expect(repeat).toMatchObject({ status: 'duplicate', studyId: first.studyId });
+    expect(repeat.suggestedDesign).toBeUndefined();
   });
 
   it('answers a second import of the same file with duplicates and adds nothing', async () => {

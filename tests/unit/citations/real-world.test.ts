@@ -220,4 +220,25 @@ describe('plain text out of citation-js rich text', () => {
       custom: { titleItalics: [[11, 19]] },
     });
   });
+
+  // Text of characters below U+0300 skips normalization; anything above it is still composed.
+  it('composes decomposed accents and a dotless i with its accent, and leaves plain Latin text as it is', () => {
+    expect(
+      plainCsl({
+        title: 'Cafe\u0301 training and the \u0131\u0308 of Nai\u0308ve climbers',
+        author: [
+          { family: 'Mu\u0308ller', given: 'J\u00f8rn' },
+          { family: 'Ostby', given: 'Runa' },
+        ],
+        publisher: 'Kelvin \u212a Press',
+      }),
+    ).toEqual({
+      title: 'Café training and the ï of Naïve climbers',
+      author: [
+        { family: 'Müller', given: 'Jørn' },
+        { family: 'Ostby', given: 'Runa' },
+      ],
+      publisher: 'Kelvin K Press',
+    });
+  });
 });
