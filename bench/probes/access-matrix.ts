@@ -77,7 +77,7 @@ async function main() {
     }
     const changed = changedTables(before, await db.snapshot());
     const summary = [
-      `routes from the filesystem: ${routes.length} (method × path), actors per team: 6 (demo) and 7 (other)`,
+      `from the filesystem: ${routes.filter((e) => e.kind === 'api').length} API methods (${routes.filter((e) => e.kind === 'api' && e.method !== 'GET').length} writes) and ${routes.filter((e) => e.kind === 'page').length} pages; addresses with real ids: ${rows.length}; actors: 6 on the demo team's rows, 7 on the other team's`,
       `requests checked: ${checked}; allowed writes not sent: ${skipped}`,
       `leaks: ${leaks.length}`,
       ...leaks.map((l) => `  LEAK ${l}`),

@@ -5,6 +5,7 @@
  * a malformed request changes nothing (docs/api/README.md, "Errors").
  * Run: npx tsx bench/probes/fuzz.ts [total, default 12000]
  */
+import { readFileSync } from 'node:fs';
 import { wellFormed, type Ids } from './lib/bodies';
 import { changedTables, ReadOnlyDb } from './lib/database';
 import { BROKEN_JSON, ODD_PATH_IDS, oneFieldWrong, randomlyWrong, WRONG_TYPES, type Malformed } from './lib/malformed';
@@ -102,8 +103,10 @@ async function main() {
         sent++;
         statuses.set(answer.status, (statuses.get(answer.status) ?? 0) + 1);
         const where = `${e.method} ${r.path} ${r.label}${r.contentType ? ` (${r.contentType})` : ''}`;
-        if (answer.status >= 500) failures.push(`${where} → ${answer.status}`);
-        else if (answer.status < 300) accepted.push(`${where} → ${answer.status} ${answer.text.slice(0, 120)}`);
+        if (answer.status >= 500 || answer.status === 0) failures.push(`${where} → ${answer.status || answer.text}`);
+        else if (answer.status !== 400 && answer.status !== 415) {
+          accepted.push(`${where} → ${answer.status} ${answer.text.slice(0, 120)}`);
+        }
       }
       const codes = [...statuses]
         .sort(([a], [b]) => a - b)
@@ -116,13 +119,14 @@ async function main() {
     const changed = changedTables(before, await db.snapshot());
     const summary = [
       `write routes: ${writes.length} (JSON ${jsonRoutes}); malformed requests sent: ${sent}`,
-      `5xx: ${failures.length}`,
+      `5xx or no answer: ${failures.length}`,
       ...failures.slice(0, 50).map((f) => `  ${f}`),
-      `accepted (2xx): ${accepted.length}`,
+      `answered other than 400/415 (got past validation): ${accepted.length}`,
       ...accepted.slice(0, 50).map((f) => `  ${f}`),
       `rows changed: ${changed.length ? JSON.stringify(changed) : 0}`,
       `owner still signed in at the end: ${me.status === 200 ? 'yes' : `no (${me.status})`}`,
     ].join('\n');
+    if (failures.length) console.log(readFileSync(app.logFile, 'utf8').split('\n').slice(-40).join('\n'));
     publish('fuzz', `${summary}\n\n${table(['method', 'route', 'body', 'requests', 'answers'], rows)}`);
     process.exitCode = failures.length || changed.length || me.status !== 200 ? 1 : 0;
   } finally {

@@ -36,7 +36,14 @@ export class Caller {
     if (options.raw !== undefined) body = options.raw;
     else if (options.json !== undefined) body = JSON.stringify(options.json);
     if (body !== undefined) headers.set('content-type', options.contentType ?? 'application/json');
-    const res = await fetch(this.base + path, { method, headers, body, redirect: 'manual' });
+    let res: Response;
+    try {
+      res = await fetch(this.base + path, { method, headers, body, redirect: 'manual' });
+    } catch (error) {
+      // No answer at all (the server closed the connection): status 0, the reason as the text.
+      const cause = (error as { cause?: { message?: string } }).cause?.message ?? String(error);
+      return { status: 0, contentType: '', text: `no answer: ${cause}`, json: null };
+    }
     for (const setCookie of res.headers.getSetCookie()) {
       const [pair] = setCookie.split(';');
       this.cookie = /=$/.test(pair) || /Max-Age=0/i.test(setCookie) ? '' : pair;
