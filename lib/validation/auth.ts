@@ -10,10 +10,13 @@ export const email = z
   .toLowerCase()
   .pipe(z.email({ error: 'Enter a valid e-mail address.' }));
 
+/** The longest password an account can have (sign-up, reset, invitation). */
+const MAX_PASSWORD = 200;
+
 export const newPassword = z
   .string({ error: 'Choose a password.' })
   .min(10, { error: 'Use at least 10 characters.' })
-  .max(200, { error: 'Use at most 200 characters.' });
+  .max(MAX_PASSWORD, { error: `Use at most ${MAX_PASSWORD} characters.` });
 
 const name = z
   .string({ error: 'Enter your name.' })
@@ -34,7 +37,12 @@ export const signUpSchema = z.object({
 
 export const signInSchema = z.object({
   email,
-  password: z.string({ error: 'Enter your password.' }).min(1, { error: 'Enter your password.' }),
+  // Longer than any account's password cannot be right: refused as bad input before the throttle
+  // counts a try or the hash reads it (docs/api/README.md, "Errors").
+  password: z
+    .string({ error: 'Enter your password.' })
+    .min(1, { error: 'Enter your password.' })
+    .max(MAX_PASSWORD, { error: 'That password is longer than any account can have.' }),
 });
 
 export const resetRequestSchema = z.object({ email });
