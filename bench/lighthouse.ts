@@ -103,7 +103,10 @@ async function audit(
     // this script's TypeScript loader would have rewritten them with helpers the page lacks.
     // With --save, the first run also keeps its trace and other artifacts (Lighthouse's -GA), where
     // every LayoutShift event lists the moved nodes with their old and new rectangles.
-    const gather = saveDir && i === 0 ? [`-GA=${path.join(saveDir, `${new URL(url).pathname.replace(/\W+/g, '_')}-${preset}-artifacts`)}`] : [];
+    const gather =
+      saveDir && i === 0
+        ? [`-GA=${path.join(saveDir, `${new URL(url).pathname.replace(/\W+/g, '_')}-${preset}-artifacts`)}`]
+        : [];
     const out = execFileSync(process.execPath, [...args, ...gather], { maxBuffer: 64 * 1024 * 1024, encoding: 'utf8' });
     const lhr = JSON.parse(out) as Result;
     if (lhr.runtimeError) throw new Error(`${url}: ${lhr.runtimeError.message}`);

@@ -311,6 +311,9 @@ export function ReviewEditor({
           text below it does not move down when the editor arrives. */}
       {editable && (
         <EditorToolbar
+          // A new toolbar when the editor arrives: its state hook caches the editor it started
+          // with until the first transaction, which would leave the tools disabled until then.
+          key={editor ? 'editor' : 'waiting'}
           editor={editor}
           onAddMechanism={onAddMechanism}
           onInsertCitation={() => {

@@ -182,7 +182,7 @@ describe('a coach takes a claim apart in the workbench', () => {
       await page.goto(reviewPath);
       if (javaScriptEnabled) {
         await page.waitForSelector('.ProseMirror [data-testid=mechanism-block]', { timeout: 60_000 });
-        await page.getByRole('button', { name: 'Bold' }).and(page.locator(':enabled')).waitFor();
+        await page.getByRole('button', { name: 'Bold', exact: true, disabled: false }).waitFor();
       } else {
         // The server's HTML already has the verdict and each block's probability.
         expect(await page.getByTestId('verdict-label').count()).toBe(1);
