@@ -19,25 +19,19 @@ let counter = 0;
 export function useBrowser() {
   let browser: Browser;
   beforeAll(async () => {
-    browser = await chromium.launch({
-      executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
-      args: CHROMIUM_ARGS,
-    });
+    browser = await chromium.launch({ executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium', args: CHROMIUM_ARGS });
   });
   afterAll(async () => {
     await browser?.close();
   });
   return {
     baseURL: inject('baseURL'),
-    async newContext(
-      opts: { viewport?: { width: number; height: number }; javaScriptEnabled?: boolean } = {},
-    ): Promise<BrowserContext> {
+    async newContext(opts: { viewport?: { width: number; height: number } } = {}): Promise<BrowserContext> {
       // A distinct address per person, so one journey's failed sign-ins do not throttle another's.
       const address = `10.${process.pid % 250}.${Math.floor(++counter / 250)}.${counter % 250}`;
       return browser.newContext({
         baseURL: inject('baseURL'),
         viewport: opts.viewport ?? { width: 1280, height: 900 },
-        javaScriptEnabled: opts.javaScriptEnabled ?? true,
         extraHTTPHeaders: { 'x-forwarded-for': address },
       });
     },
