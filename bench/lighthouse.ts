@@ -7,22 +7,25 @@
  * - the athlete's verdict page /v/<slug>, signed out, mobile preset (Lighthouse's default) —
  *   goal: performance ≥ 95, accessibility 100.
  *
- *   npm run build && npx tsx bench/lighthouse.ts [--json]
+ *   npm run build && npx tsx bench/lighthouse.ts [--json] [--page=workbench|verdict] [--save=DIR] [--once]
  *
  * Uses a throwaway seeded SQLite file and `npm start`'s server (scripts/start.ts). Each page is
  * run three times and the median performance score kept (Lighthouse's own advice: single runs
  * vary). Every failed audit of a category below 100 is listed, so a regression says what broke.
+ * On a shared machine Total Blocking Time follows the load, so the report also gives the load
+ * average, what moved (layout shifts and their elements) and where the main thread's time went —
+ * figures that vary less from run to run. `--save=DIR` keeps every run's full report.
  */
 import { execFileSync, spawn } from 'node:child_process';
 import { createRequire } from 'node:module';
-import { mkdtempSync, rmSync } from 'node:fs';
+import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { createServer } from 'node:net';
-import { tmpdir } from 'node:os';
+import { loadavg, tmpdir } from 'node:os';
 import path from 'node:path';
 import * as chromeLauncher from 'chrome-launcher';
 import type { Result } from 'lighthouse';
 
-const RUNS = 3;
+const DEFAULT_RUNS = 3;
 const LIGHTHOUSE_CLI = createRequire(import.meta.url).resolve('lighthouse/cli/index.js');
 const CHROMIUM = '/usr/bin/chromium';
 const COACH = { email: 'coach@granite-hollow.test', password: 'loadbearing-demo' };
@@ -50,7 +53,29 @@ interface PageScore {
   runs: number[];
   failing: string[];
   metrics: Record<string, string>;
+  /** Each run's CLS and TBT, in run order. */
+  runMetrics: { cls: number; tbtMs: number }[];
+  /** The median run's layout shifts: the element that moved and its share of the CLS. */
+  shifts: string[];
+  /** The median run's main-thread time by category, ms. */
+  mainThread: Record<string, number>;
+  /** The median run's long tasks: script and duration. */
+  longTasks: string[];
+  loadAverage: number[];
 }
+
+interface TableItem {
+  [key: string]: unknown;
+}
+const tableItems = (lhr: Result, id: string): TableItem[] => {
+  const details = lhr.audits[id]?.details as { items?: TableItem[] } | undefined;
+  return details?.items ?? [];
+};
+const shortUrl = (url: unknown) => (typeof url === 'string' ? url.replace(/^https?:\/\/[^/]+/, '') : String(url));
+
+const saveDir = process.argv.find((a) => a.startsWith('--save='))?.slice('--save='.length);
+const onlyOnce = process.argv.includes('--once');
+const onlyPage = process.argv.find((a) => a.startsWith('--page='))?.slice('--page='.length);
 
 async function audit(
   port: number,
@@ -69,14 +94,27 @@ async function audit(
     ...(preset === 'desktop' ? ['--preset=desktop'] : []),
     ...(cookie ? [`--extra-headers=${JSON.stringify({ Cookie: cookie })}`] : []),
   ];
+  const RUNS = onlyOnce ? 1 : DEFAULT_RUNS;
   const results: Result[] = [];
+  const loads: number[] = [];
   for (let i = 0; i < RUNS; i++) {
+    loads.push(loadavg()[0]);
     // The CLI in its own plain Node process: Lighthouse sends functions' source to the page, and
     // this script's TypeScript loader would have rewritten them with helpers the page lacks.
-    const out = execFileSync(process.execPath, args, { maxBuffer: 64 * 1024 * 1024, encoding: 'utf8' });
+    // With --save, the first run also keeps its trace and other artifacts (Lighthouse's -GA), where
+    // every LayoutShift event lists the moved nodes with their old and new rectangles.
+    const gather =
+      saveDir && i === 0
+        ? [`-GA=${path.join(saveDir, `${new URL(url).pathname.replace(/\W+/g, '_')}-${preset}-artifacts`)}`]
+        : [];
+    const out = execFileSync(process.execPath, [...args, ...gather], { maxBuffer: 64 * 1024 * 1024, encoding: 'utf8' });
     const lhr = JSON.parse(out) as Result;
     if (lhr.runtimeError) throw new Error(`${url}: ${lhr.runtimeError.message}`);
     results.push(lhr);
+    if (saveDir) {
+      const name = `${new URL(url).pathname.replace(/\W+/g, '_')}-${preset}-${i + 1}.json`;
+      writeFileSync(path.join(saveDir, name), out);
+    }
   }
   const perf = results.map((r) => Math.round((r.categories.performance.score ?? 0) * 100));
   const lhr = results.find((r) => Math.round((r.categories.performance.score ?? 0) * 100) === median(perf))!;
@@ -90,6 +128,21 @@ async function audit(
     }
   }
   const metric = (id: string) => lhr.audits[id]?.displayValue ?? '—';
+  const shifts = tableItems(lhr, 'layout-shifts').map((item) => {
+    const node = item.node as { selector?: string; snippet?: string } | undefined;
+    const what = node?.snippet ? node.snippet.slice(0, 120) : (node?.selector ?? 'unattributed');
+    return `${Number(item.score).toFixed(3)} ${what}`;
+  });
+  const mainThread = Object.fromEntries(
+    tableItems(lhr, 'mainthread-work-breakdown').map((item) => [
+      String(item.groupLabel),
+      Math.round(Number(item.duration)),
+    ]),
+  );
+  const longTasks = tableItems(lhr, 'long-tasks').map(
+    (item) =>
+      `${Math.round(Number(item.duration))} ms at ${Math.round(Number(item.startTime))} ms ${shortUrl(item.url)}`,
+  );
   return {
     page: new URL(url).pathname,
     preset,
@@ -103,6 +156,14 @@ async function audit(
       TBT: metric('total-blocking-time'),
       CLS: metric('cumulative-layout-shift'),
     },
+    runMetrics: results.map((r) => ({
+      cls: Number((r.audits['cumulative-layout-shift']?.numericValue ?? 0).toFixed(3)),
+      tbtMs: Math.round(r.audits['total-blocking-time']?.numericValue ?? 0),
+    })),
+    shifts,
+    mainThread,
+    longTasks,
+    loadAverage: loads.map((l) => Number(l.toFixed(2))),
   };
 }
 
@@ -165,10 +226,11 @@ async function main() {
     await fetch(`${base}/reviews/${reviewId}`, { headers: { cookie } });
     await fetch(`${base}/v/${VERDICT_SLUG}`);
 
-    const scores = [
-      await audit(chrome.port, `${base}/reviews/${reviewId}`, 'desktop', cookie),
-      await audit(chrome.port, `${base}/v/${VERDICT_SLUG}`, 'mobile', undefined),
-    ];
+    if (saveDir) mkdirSync(saveDir, { recursive: true });
+    const scores: PageScore[] = [];
+    if (onlyPage !== 'verdict') scores.push(await audit(chrome.port, `${base}/reviews/${reviewId}`, 'desktop', cookie));
+    if (onlyPage !== 'workbench')
+      scores.push(await audit(chrome.port, `${base}/v/${VERDICT_SLUG}`, 'mobile', undefined));
     if (process.argv.includes('--json')) {
       console.log(JSON.stringify(scores, null, 2));
       return;
@@ -184,6 +246,17 @@ async function main() {
           .map(([k, v]) => `${k} ${v}`)
           .join(' · ')}`,
       );
+      console.log(
+        `  runs: ${s.runMetrics.map((m) => `CLS ${m.cls} TBT ${m.tbtMs} ms`).join(' | ')}; ` +
+          `load average (1 min) at each run's start: ${s.loadAverage.join(', ')}`,
+      );
+      console.log(
+        `  main thread (median run): ${Object.entries(s.mainThread)
+          .map(([k, v]) => `${k} ${v} ms`)
+          .join(' · ')}`,
+      );
+      for (const t of s.longTasks) console.log(`  long task — ${t}`);
+      for (const shift of s.shifts) console.log(`  layout shift — ${shift}`);
       for (const f of s.failing) console.log(`  below 100 — ${f}`);
     }
   } finally {

@@ -38,29 +38,31 @@ function Tool({ label, shortcut, pressed, disabled, onClick, children, wide }: T
 
 /**
  * The formatting bar. One tab stop: ←/→ move between the tools (the ARIA toolbar pattern), so a
- * keyboard user reaches the text in one Tab instead of nine.
+ * keyboard user reaches the text in one Tab instead of nine. Drawn disabled while `editor` is
+ * still null (it is created after hydration), so the page does not move when it arrives.
  */
 export function EditorToolbar({
   editor,
   onAddMechanism,
   onInsertCitation,
 }: {
-  editor: Editor;
+  editor: Editor | null;
   onAddMechanism: () => void;
   onInsertCitation: () => void;
 }) {
   const ref = useRef<HTMLDivElement>(null);
   const state = useEditorState({
     editor,
-    selector: ({ editor: e }) => ({
-      bold: e.isActive('bold'),
-      italic: e.isActive('italic'),
-      heading: e.isActive('heading', { level: 2 }),
-      subheading: e.isActive('heading', { level: 3 }),
-      bullet: e.isActive('bulletList'),
-      ordered: e.isActive('orderedList'),
-      editable: e.isEditable,
-    }),
+    selector: ({ editor: e }) =>
+      e && {
+        bold: e.isActive('bold'),
+        italic: e.isActive('italic'),
+        heading: e.isActive('heading', { level: 2 }),
+        subheading: e.isActive('heading', { level: 3 }),
+        bullet: e.isActive('bulletList'),
+        ordered: e.isActive('orderedList'),
+        editable: e.isEditable,
+      },
   });
 
   const onKeyDown = (event: KeyboardEvent<HTMLDivElement>) => {
@@ -79,15 +81,16 @@ export function EditorToolbar({
     buttons[next].focus();
   };
 
-  const chain = () => editor.chain().focus();
-  const off = !state.editable;
+  // Every tool is disabled while there is no editor, so `editor!` below is never reached without one.
+  const chain = () => editor!.chain().focus();
+  const off = !state?.editable;
 
   return (
     <div
       ref={ref}
       role="toolbar"
       aria-label="Formatting"
-      aria-controls="review-body"
+      aria-controls={editor ? 'review-body' : undefined}
       onKeyDown={onKeyDown}
       // Roving tab stop: only the first tool is in the tab order until arrows move it.
       onFocus={(e) => {
@@ -100,7 +103,7 @@ export function EditorToolbar({
       <Tool
         label="Bold"
         shortcut="Ctrl+B"
-        pressed={state.bold}
+        pressed={state?.bold}
         disabled={off}
         onClick={() => chain().toggleBold().run()}
       >
@@ -111,7 +114,7 @@ export function EditorToolbar({
       <Tool
         label="Italic"
         shortcut="Ctrl+I"
-        pressed={state.italic}
+        pressed={state?.italic}
         disabled={off}
         onClick={() => chain().toggleItalic().run()}
       >
@@ -121,7 +124,7 @@ export function EditorToolbar({
       </Tool>
       <Tool
         label="H2 heading"
-        pressed={state.heading}
+        pressed={state?.heading}
         disabled={off}
         onClick={() => chain().toggleHeading({ level: 2 }).run()}
       >
@@ -129,7 +132,7 @@ export function EditorToolbar({
       </Tool>
       <Tool
         label="H3 subheading"
-        pressed={state.subheading}
+        pressed={state?.subheading}
         disabled={off}
         onClick={() => chain().toggleHeading({ level: 3 }).run()}
       >
@@ -138,7 +141,7 @@ export function EditorToolbar({
       <span aria-hidden="true" className="bg-line-strong mx-1 h-6 w-px" />
       <Tool
         label="Bulleted list"
-        pressed={state.bullet}
+        pressed={state?.bullet}
         disabled={off}
         onClick={() => chain().toggleBulletList().run()}
       >
@@ -151,7 +154,7 @@ export function EditorToolbar({
       </Tool>
       <Tool
         label="Numbered list"
-        pressed={state.ordered}
+        pressed={state?.ordered}
         disabled={off}
         onClick={() => chain().toggleOrderedList().run()}
       >

@@ -1,9 +1,11 @@
 'use client';
 
 import { NodeViewWrapper, type ReactNodeViewProps } from '@tiptap/react';
+import type { ElementType, ReactNode } from 'react';
 import { cn } from '@/components/ui/cn';
 import { MECHANISM_KIND_LABEL, percent } from '@/components/review/labels';
 import { useOptionalWorkbenchContext } from '@/components/review/workbench-context';
+import type { MechanismDTO, VerdictMechanismDTO } from '@/lib/reviews/types';
 
 /**
  * How a mechanism block looks in the review body: its kind, name, whether the claim names it,
@@ -14,49 +16,90 @@ import { useOptionalWorkbenchContext } from '@/components/review/workbench-conte
 export function MechanismBlockView({ node, selected, deleteNode, editor }: ReactNodeViewProps) {
   const workbench = useOptionalWorkbenchContext();
   const id = node.attrs.mechanismId as number | null;
-  const mechanism = id == null ? undefined : workbench?.mechanisms.get(id);
-  const score = id == null ? undefined : workbench?.scores.get(id);
+  return (
+    <MechanismBlockFace
+      as={NodeViewWrapper}
+      id={id}
+      mechanism={id == null ? undefined : workbench?.mechanisms.get(id)}
+      score={id == null ? undefined : workbench?.scores.get(id)}
+      verdictLoading={workbench?.verdictLoading ?? false}
+      selected={selected}
+      editable={editor.isEditable}
+      onOpen={(mechanismId) => workbench?.openMechanism(mechanismId)}
+      onRemove={() => deleteNode()}
+    />
+  );
+}
 
+/**
+ * The block itself, for the node view and for the text shown before the editor exists
+ * (BodyPreview), so both have the same size and nothing moves when the editor takes over.
+ * Without `onRemove` (no editor yet) the remove button is shown but disabled.
+ */
+export function MechanismBlockFace({
+  as: Wrapper = 'div',
+  id,
+  mechanism,
+  score,
+  verdictLoading,
+  selected = false,
+  editable,
+  onOpen,
+  onRemove,
+}: {
+  as?: ElementType;
+  id: number | null;
+  mechanism: MechanismDTO | undefined;
+  score: VerdictMechanismDTO | undefined;
+  verdictLoading: boolean;
+  selected?: boolean;
+  editable: boolean;
+  onOpen: (mechanismId: number) => void;
+  onRemove?: () => void;
+}): ReactNode {
+  // NodeViewWrapper takes the element to draw as a prop; a plain element needs none.
+  const asDiv = Wrapper === 'div' ? {} : { as: 'div' };
   if (!mechanism) {
     return (
-      <NodeViewWrapper
-        as="div"
+      <Wrapper
+        {...asDiv}
         contentEditable={false}
         data-testid="mechanism-block"
         data-mechanism-id={id ?? ''}
         className={cn(
-          'border-line-strong bg-paper-sunken text-ink-muted my-3 flex flex-wrap items-center justify-between gap-2 rounded-md border border-dashed px-4 py-3 text-sm',
+          'border-line-strong bg-paper-sunken text-ink-muted my-3 flex flex-wrap items-center justify-between gap-2 rounded-md border border-dashed px-4 py-3 text-sm whitespace-normal',
           selected && 'ring-rope-500 ring-2',
         )}
       >
         <span>This mechanism was deleted or belongs to another review.</span>
-        {editor.isEditable && (
+        {editable && (
           <button
             type="button"
-            onClick={() => deleteNode()}
+            onClick={onRemove}
+            disabled={!onRemove}
             className="border-line-strong bg-paper-raised text-ink hover:bg-chalk-100 rounded-md border px-3 py-1.5 font-semibold"
           >
             Remove block
           </button>
         )}
-      </NodeViewWrapper>
+      </Wrapper>
     );
   }
 
   const scoreText = score
     ? `${percent(score.probability)} · ${score.term}`
-    : workbench?.verdictLoading
+    : verdictLoading
       ? 'Scoring…'
       : 'Not scored yet';
 
   return (
-    <NodeViewWrapper
-      as="div"
+    <Wrapper
+      {...asDiv}
       contentEditable={false}
       data-testid="mechanism-block"
       data-mechanism-id={id}
       className={cn(
-        'group border-granite-200 bg-granite-50/70 shadow-card my-3 flex items-stretch overflow-hidden rounded-md border',
+        'group border-granite-200 bg-granite-50/70 shadow-card my-3 flex items-stretch overflow-hidden rounded-md border whitespace-normal',
         selected && 'ring-rope-500 ring-2 ring-offset-1',
       )}
     >
@@ -80,7 +123,7 @@ export function MechanismBlockView({ node, selected, deleteNode, editor }: React
           leaves events on buttons alone and would otherwise turn the click into a selection. */}
       <button
         type="button"
-        onClick={() => workbench?.openMechanism(mechanism.id)}
+        onClick={() => onOpen(mechanism.id)}
         className="hover:bg-granite-100/60 flex min-w-0 flex-1 flex-wrap items-center justify-between gap-x-4 gap-y-1 px-4 py-3 text-left [&_*]:pointer-events-none"
       >
         <span className="min-w-0">
@@ -105,6 +148,6 @@ export function MechanismBlockView({ node, selected, deleteNode, editor }: React
           </span>
         </span>
       </button>
-    </NodeViewWrapper>
+    </Wrapper>
   );
 }

@@ -12,8 +12,8 @@ import { useWorkbenchContext, type WorkbenchContextValue } from '@/components/re
 import type { ReviewDTO, StudyDTO } from '@/lib/reviews/types';
 import { apiFetch, errorMessage } from '@/lib/swr/fetcher';
 import { isReviewKey } from '@/lib/swr/keys';
-import { ReviewBody } from '@/components/rounds/ReviewBody';
 import { toEditorContent } from './body';
+import { BodyPreviewFrame } from './BodyPreview';
 import { CitationView } from './CitationView';
 import { EditorToolbar } from './EditorToolbar';
 import { Citation } from './extensions/citation';
@@ -111,6 +111,7 @@ export function ReviewEditor({
   libraryLoading,
   libraryError,
   onAddMechanism,
+  onPickCitation,
   onEditor,
 }: {
   review: ReviewDTO;
@@ -120,6 +121,8 @@ export function ReviewEditor({
   libraryLoading: boolean;
   libraryError?: string;
   onAddMechanism: () => void;
+  /** The citation picker is opening: the library it searches is wanted now. */
+  onPickCitation?: () => void;
   onEditor?: (editor: Editor | null) => void;
 }) {
   const workbench = useWorkbenchContext();
@@ -304,8 +307,20 @@ export function ReviewEditor({
         />
       )}
 
-      {editor && editable && (
-        <EditorToolbar editor={editor} onAddMechanism={onAddMechanism} onInsertCitation={() => setPickerOpen(true)} />
+      {/* The toolbar is there from the first paint, disabled until the editor exists, so the
+          text below it does not move down when the editor arrives. */}
+      {editable && (
+        <EditorToolbar
+          // A new toolbar when the editor arrives: its state hook caches the editor it started
+          // with until the first transaction, which would leave the tools disabled until then.
+          key={editor ? 'editor' : 'waiting'}
+          editor={editor}
+          onAddMechanism={onAddMechanism}
+          onInsertCitation={() => {
+            onPickCitation?.();
+            setPickerOpen(true);
+          }}
+        />
       )}
       {editable && (
         <p className="border-line text-ink-muted border-b px-5 py-2 text-sm">
@@ -316,16 +331,10 @@ export function ReviewEditor({
       {editor ? (
         <EditorContent editor={editor} className={PROSE} />
       ) : (
-        // Until the editor exists (it is created after hydration), the same text as plain elements:
-        // the page keeps its height and readers can start reading, instead of a blank box that
-        // pushes everything below it down when the editor appears.
-        <div aria-busy="true">
-          <ReviewBody
-            body={review.body}
-            mechanismName={(id) => workbench.mechanisms.get(id)?.name}
-            citation={(id) => workbench.studies.get(id)?.citation}
-          />
-        </div>
+        // Until the editor exists (it is created after hydration), the same text drawn as the
+        // editor draws it, rendered on the server at its final size, so nothing below it moves
+        // when the editor takes its place (docs/architecture.md, "The workbench's weight").
+        <BodyPreviewFrame body={toEditorContent(review.body)} busy />
       )}
 
       {pickerUsed && (

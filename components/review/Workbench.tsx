@@ -2,21 +2,21 @@
 
 import type { Editor } from '@tiptap/react';
 import { notFound } from 'next/navigation';
-import { useCallback, useMemo, useState } from 'react';
-import { useSWRConfig } from 'swr';
+import { Suspense, useCallback, useMemo, useState } from 'react';
+import { SWRConfig, useSWRConfig } from 'swr';
 import { ReviewEditor } from '@/components/editor/ReviewEditor';
 import { ReviewSaver } from '@/components/editor/review-saver';
 import { Button } from '@/components/ui/Button';
 import { VerdictPanel } from '@/components/verdict/VerdictPanel';
 import { decide, type Actor } from '@/lib/auth/policy';
-import type { WorkbenchDTO } from '@/lib/reviews/types';
-import { isReviewListKey } from '@/lib/swr/keys';
+import type { VerdictDTO, WorkbenchDTO } from '@/lib/reviews/types';
+import { isReviewListKey, keys } from '@/lib/swr/keys';
 import { useLibrary } from '@/lib/swr/use-library';
 import { useReviewMutations } from '@/lib/swr/use-review-mutations';
 import { useVerdict } from '@/lib/swr/use-verdict';
 import { useWorkbench } from '@/lib/swr/use-workbench';
 import { RoundStatusBadge } from '@/components/rounds/RoundStatusBadge';
-import { useReviewFrozen } from '@/lib/swr/use-rounds';
+import { roundsKey, useReviewFrozen, type RoundList } from '@/lib/swr/use-rounds';
 import { ReviewHeader } from './ReviewHeader';
 import type { ViewerProps } from './viewer';
 import { AppraisalDialog, type AppraisalDialogState } from './workbench/AppraisalDialog';
@@ -26,6 +26,7 @@ import { DoseCheckPanel, PublishPanel, RecommendationsPanel, SimilarReviews } fr
 import { MechanismCard } from './workbench/MechanismCard';
 import { MechanismDialog, type MechanismDialogState } from './workbench/MechanismDialog';
 import { OutcomeSection } from './workbench/OutcomeSection';
+import { ReviewText } from './workbench/ReviewText';
 import { usePlacedMechanisms } from './workbench/use-placed-mechanisms';
 import { useWorkbenchMaps } from './workbench/use-workbench-maps';
 import { WorkbenchSkeleton } from './workbench/WorkbenchSkeleton';
@@ -33,16 +34,43 @@ import { WorkbenchContext, type WorkbenchContextValue } from './workbench-contex
 
 type Viewer = ViewerProps;
 
+/**
+ * What the server read for the first view besides the review itself: the verdict and the peer
+ * review rounds. Handed to SWR as fallback, so the first HTML already has the verdict panel,
+ * the mechanisms' probabilities and the round notice at their final size — nothing fetched after
+ * hydration pushes the page around (docs/architecture.md, "The workbench's weight").
+ */
+export interface WorkbenchFirstView {
+  verdict?: VerdictDTO;
+  rounds?: RoundList;
+}
+
 /** The review workbench: loads the review, then hands it to the editor and panels. */
 export function Workbench({
   reviewId,
   viewer,
   fallback,
+  firstView,
 }: {
   reviewId: number;
   viewer: Viewer;
   fallback?: WorkbenchDTO;
+  firstView?: WorkbenchFirstView;
 }) {
+  const swrFallback = useMemo(() => {
+    const entries: Record<string, unknown> = {};
+    if (firstView?.verdict) entries[keys.verdict(reviewId)] = firstView.verdict;
+    if (firstView?.rounds) entries[roundsKey(reviewId)] = firstView.rounds;
+    return { fallback: entries };
+  }, [firstView, reviewId]);
+  return (
+    <SWRConfig value={swrFallback}>
+      <WorkbenchData reviewId={reviewId} viewer={viewer} fallback={fallback} />
+    </SWRConfig>
+  );
+}
+
+function WorkbenchData({ reviewId, viewer, fallback }: { reviewId: number; viewer: Viewer; fallback?: WorkbenchDTO }) {
   const { data, error, mutate } = useWorkbench(reviewId, fallback);
   if (error?.status === 404) notFound();
   if (error && !data) {
@@ -67,14 +95,21 @@ function LoadedWorkbench({ data, viewer }: { data: WorkbenchDTO; viewer: Viewer 
   const reviewId = review.id;
   const mutations = useReviewMutations(reviewId);
   const verdict = useVerdict(reviewId);
-  const library = useLibrary(review.teamId);
+  // The whole team library feeds the citation picker and the appraisal form only: it is read the
+  // first time one of them opens, not with the page (it can be thousands of studies).
+  const [libraryWanted, setLibraryWanted] = useState(false);
+  const library = useLibrary(libraryWanted ? review.teamId : null);
   // While a peer-review round is open the review is frozen (the server answers 409 as well).
   const frozen = useReviewFrozen(reviewId);
   // One saver for every PATCH of this review (body autosave and claim edits share the version).
   const [saver] = useState(() => new ReviewSaver(reviewId, review.version));
   const [editor, setEditor] = useState<Editor | null>(null);
   const [mechanismDialog, setMechanismDialog] = useState<MechanismDialogState>(null);
-  const [appraisalDialog, setAppraisalDialog] = useState<AppraisalDialogState>(null);
+  const [appraisalDialog, setAppraisalDialogState] = useState<AppraisalDialogState>(null);
+  const setAppraisalDialog = useCallback((state: AppraisalDialogState) => {
+    if (state) setLibraryWanted(true);
+    setAppraisalDialogState(state);
+  }, []);
   const [editingClaim, setEditingClaim] = useState(false);
   const [confirmingDelete, setConfirmingDelete] = useState(false);
   const [notice, setNotice] = useState<string | null>(null);
@@ -83,6 +118,11 @@ function LoadedWorkbench({ data, viewer }: { data: WorkbenchDTO; viewer: Viewer 
   // The same policy module the route handlers use; the server still checks every write.
   const canEdit =
     !frozen && decide(actor, 'review.update', { teamId: review.teamId, authorId: review.authorId }) === 'allow';
+  // The editor is created only for someone who can edit, and kept from then on (a round opening
+  // while they type leaves their text in place, read-only); everyone else reads the same text
+  // without an editor behind it.
+  const [editorWanted, setEditorWanted] = useState(canEdit);
+  if (canEdit && !editorWanted) setEditorWanted(true);
   const canDelete = decide(actor, 'review.delete', { teamId: review.teamId, authorId: review.authorId }) === 'allow';
 
   const { mechanisms, mechanismMap, studyMap, studyList, scores, byTarget } = useWorkbenchMaps(
@@ -144,16 +184,21 @@ function LoadedWorkbench({ data, viewer }: { data: WorkbenchDTO; viewer: Viewer 
 
       <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_22rem] xl:grid-cols-[minmax(0,1fr)_24rem]">
         <div className="min-w-0 lg:col-start-1">
-          <ReviewEditor
-            review={review}
-            saver={saver}
-            editable={canEdit}
-            library={studyList}
-            libraryLoading={library.isLoading}
-            libraryError={library.error ? `The library could not be loaded: ${library.error.message}` : undefined}
-            onAddMechanism={() => setMechanismDialog({ mode: 'create' })}
-            onEditor={setEditor}
-          />
+          {editorWanted ? (
+            <ReviewEditor
+              review={review}
+              saver={saver}
+              editable={canEdit}
+              library={studyList}
+              libraryLoading={library.isLoading}
+              libraryError={library.error ? `The library could not be loaded: ${library.error.message}` : undefined}
+              onAddMechanism={() => setMechanismDialog({ mode: 'create' })}
+              onPickCitation={() => setLibraryWanted(true)}
+              onEditor={setEditor}
+            />
+          ) : (
+            <ReviewText review={review} />
+          )}
         </div>
 
         {/* On a phone the verdict follows the text; on a desktop it stays in view below the
@@ -163,7 +208,12 @@ function LoadedWorkbench({ data, viewer }: { data: WorkbenchDTO; viewer: Viewer 
           tabIndex={-1}
           className="min-w-0 lg:sticky lg:top-20 lg:col-start-2 lg:row-span-5 lg:row-start-1 lg:max-h-[calc(100dvh-6rem)] lg:self-start lg:overflow-y-auto lg:overscroll-contain"
         >
-          <VerdictPanel reviewId={reviewId} mechanisms={mechanisms} />
+          {/* Each <Suspense> here is hydrated in a task of its own (nothing in them suspends): the
+              page's hydration comes in several short tasks instead of one long one, so the
+              browser can answer input in between (docs/architecture.md, "The workbench's weight"). */}
+          <Suspense>
+            <VerdictPanel reviewId={reviewId} mechanisms={mechanisms} />
+          </Suspense>
         </aside>
 
         <section aria-labelledby="mechanisms-title" className="min-w-0 space-y-4 lg:col-start-1">
@@ -184,35 +234,42 @@ function LoadedWorkbench({ data, viewer }: { data: WorkbenchDTO; viewer: Viewer 
                 : 'The author has not listed any.'}
             </p>
           )}
-          {mechanisms.map((m) => (
-            <MechanismCard
-              key={m.id}
-              mechanism={m}
-              score={scores.get(m.id)}
-              appraisals={byTarget.get(m.id) ?? []}
-              studies={studyMap}
-              canEdit={canEdit}
-              inText={placed.has(m.id)}
-              poolable={poolable(m.id)}
-              reviewId={reviewId}
-              onEdit={() => setMechanismDialog({ mode: 'edit', id: m.id })}
-              onAppraise={() => setAppraisalDialog({ mode: 'create', mechanismId: m.id })}
-              onEditAppraisal={(a) => setAppraisalDialog({ mode: 'edit', appraisal: a })}
-              onPlace={editor && canEdit ? () => insertBlock(m.id) : undefined}
-            />
-          ))}
+          <Suspense>
+            {mechanisms.map((m) => (
+              <MechanismCard
+                key={m.id}
+                mechanism={m}
+                score={scores.get(m.id)}
+                appraisals={byTarget.get(m.id) ?? []}
+                studies={studyMap}
+                canEdit={canEdit}
+                inText={placed.has(m.id)}
+                poolable={poolable(m.id)}
+                reviewId={reviewId}
+                onEdit={() => setMechanismDialog({ mode: 'edit', id: m.id })}
+                onAppraise={() => setAppraisalDialog({ mode: 'create', mechanismId: m.id })}
+                onEditAppraisal={(a) => setAppraisalDialog({ mode: 'edit', appraisal: a })}
+                // Offered from the first paint (it waits for the editor), so the card keeps its size.
+                onPlace={canEdit ? () => insertBlock(m.id) : undefined}
+              />
+            ))}
+          </Suspense>
         </section>
 
-        <OutcomeSection
-          reviewId={reviewId}
-          appraisals={byTarget.get(null) ?? []}
-          studies={studyMap}
-          canEdit={canEdit}
-          poolable={poolable(null)}
-          onAppraise={() => setAppraisalDialog({ mode: 'create', mechanismId: null })}
-          onEditAppraisal={(a) => setAppraisalDialog({ mode: 'edit', appraisal: a })}
-        />
+        <Suspense>
+          <OutcomeSection
+            reviewId={reviewId}
+            appraisals={byTarget.get(null) ?? []}
+            studies={studyMap}
+            canEdit={canEdit}
+            poolable={poolable(null)}
+            onAppraise={() => setAppraisalDialog({ mode: 'create', mechanismId: null })}
+            onEditAppraisal={(a) => setAppraisalDialog({ mode: 'edit', appraisal: a })}
+          />
+        </Suspense>
 
+        {/* Below the mechanisms on every screen size: each panel is fetched and drawn when the
+            reader comes near it (./workbench/lazy.tsx), not while the page loads. */}
         <div className="min-w-0 lg:col-start-1">
           <DoseCheckPanel protocol={review.protocol} mechanisms={mechanisms} verdict={verdict.data} />
         </div>

@@ -2,6 +2,7 @@
 
 import useSWR from 'swr';
 import { fetcher } from './fetcher';
+import { useFirstViewOptions } from './first-view';
 import type { AgreementDTO, CandidateDTO, CommentDTO, RoundAuditDTO, RoundDTO } from '@/lib/rounds/types';
 import type { ApiError } from './fetcher';
 
@@ -16,7 +17,9 @@ export const commentsKey = (reviewId: number, roundId: number) =>
   `/api/reviews/${reviewId}/comments?roundId=${roundId}`;
 
 export function useRounds(reviewId: number, fallbackData?: RoundList) {
-  return useSWR<RoundList, ApiError>(roundsKey(reviewId), fetcher, { fallbackData });
+  const key = roundsKey(reviewId);
+  const firstView = useFirstViewOptions(key, fallbackData);
+  return useSWR<RoundList, ApiError>(key, fetcher, { fallbackData, ...firstView });
 }
 
 export function useAgreement(reviewId: number, roundId: number | null) {

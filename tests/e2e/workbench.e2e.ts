@@ -153,6 +153,55 @@ describe('a coach takes a claim apart in the workbench', () => {
     await context.close();
   });
 
+  it('draws its first view at the final size: hydrating and creating the editor move nothing', async () => {
+    expect(reviewPath).not.toBe('');
+    // Where the page's landmarks are in the server's HTML alone (the app's scripts are not
+    // loaded; only the inline ones that put streamed parts in place run), and where they are
+    // once the page is hydrated, the editor created and the verdict shown: the same places.
+    const where = async (page: Page) => {
+      const box = async (selector: string) => {
+        const b = await page.locator(selector).first().boundingBox();
+        return b && { y: Math.round(b.y), height: Math.round(b.height) };
+      };
+      return {
+        text: await box('#review-body-title'),
+        firstBlock: await box('[data-testid=mechanism-block]'),
+        mechanisms: await box('#mechanisms-title'),
+        firstCard: await box('[data-testid=mechanism-card]'),
+        outcome: await box('#outcome-title'),
+        verdict: await box('[data-testid=verdict-panel]'),
+      };
+    };
+    const measure = async (hydrate: boolean) => {
+      const context = await browser.newContext();
+      if (!hydrate) await context.route('**/_next/static/**/*.js', (route) => route.abort());
+      const res = await context.request.post('/api/auth/sign-in', {
+        data: { email: 'coach@granite-hollow.test', password: 'loadbearing-demo' },
+      });
+      expect(res.status()).toBe(200);
+      const page = await context.newPage();
+      page.setDefaultTimeout(30_000);
+      await page.goto(reviewPath);
+      if (hydrate) {
+        await page.waitForSelector('.ProseMirror [data-testid=mechanism-block]', { timeout: 60_000 });
+        await page.getByRole('button', { name: 'Bold', exact: true, disabled: false }).waitFor();
+      } else {
+        // The server's HTML already has the verdict and each block's probability.
+        expect(await page.getByTestId('verdict-label').count()).toBe(1);
+        expect(await page.getByTestId('mechanism-block-probability').first().textContent()).toMatch(/\d+\s?%/);
+        expect(await page.locator('.ProseMirror').count()).toBe(0);
+      }
+      await page.evaluate(() => document.fonts.ready.then(() => undefined)).catch(() => undefined);
+      const found = await where(page);
+      await context.close();
+      return found;
+    };
+    const serverOnly = await measure(false);
+    const hydrated = await measure(true);
+    for (const [landmark, value] of Object.entries(serverOnly)) expect(value, landmark).not.toBeNull();
+    expect(hydrated).toEqual(serverOnly);
+  });
+
   it('uploads a PDF to a study: a fake PDF is 415, an oversize file 413, a real one downloads', async () => {
     const { context, page } = await signedIn('coach@granite-hollow.test');
     const list = await page.request.get('/api/studies?pageSize=1');

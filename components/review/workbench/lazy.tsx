@@ -1,13 +1,16 @@
 'use client';
 
 import dynamic from 'next/dynamic';
+import type { ComponentProps } from 'react';
 import { Skeleton } from '@/components/ui/Skeleton';
+import { WhenNear } from './WhenNear';
 
 /**
  * The workbench's heavier parts, each in its own chunk, fetched the first time it is shown: the
  * three dialog forms (with the validation schemas and the study search they bring), the
- * meta-analysis with its forest plot, and the similar-reviews search. The page's first load
- * keeps only what the first screen needs (docs/architecture.md, "The workbench's weight").
+ * meta-analysis with its forest plot, and the similar-reviews search; and the panels below the
+ * mechanisms, fetched when the reader comes near them. The page's first load keeps only what
+ * the first screen needs (docs/architecture.md, "The workbench's weight").
  */
 
 function FormLoading() {
@@ -41,25 +44,58 @@ export const MetaAnalysisPanel = dynamic(
   { ssr: false, loading: () => <Skeleton className="h-40 w-full" /> },
 );
 
-export const SimilarReviews = dynamic(
+/**
+ * About the height each panel below the mechanisms takes with the demo reviews on a desktop, so
+ * that its placeholder and its loading state hold its place. The placeholder is drawn well
+ * outside the viewport (WhenNear starts a screen early), so a difference moves nothing in view.
+ */
+const ROOM = { dose: 'h-80', recommendations: 'h-[36rem]', publish: 'h-48' } as const;
+
+const SimilarReviewsChunk = dynamic(
   () => import('@/components/search/SimilarReviews').then((m) => m.SimilarReviews),
   // It shows nothing until a few words match, so nothing holds its place meanwhile.
   { ssr: false, loading: () => null },
 );
+export function SimilarReviews(props: ComponentProps<typeof SimilarReviewsChunk>) {
+  return (
+    <WhenNear room={null}>
+      <SimilarReviewsChunk {...props} />
+    </WhenNear>
+  );
+}
 
-// Below the mechanisms on every screen size, so never part of the first view: the dose check,
-// the recommendations (with their form) and publishing come after the page is interactive.
-export const DoseCheckPanel = dynamic(() => import('../DoseCheckPanel').then((m) => m.DoseCheckPanel), {
+const DoseCheckChunk = dynamic(() => import('../DoseCheckPanel').then((m) => m.DoseCheckPanel), {
   ssr: false,
-  loading: () => <Skeleton className="h-48 w-full" />,
+  loading: () => <Skeleton className={`${ROOM.dose} w-full`} />,
 });
+export function DoseCheckPanel(props: ComponentProps<typeof DoseCheckChunk>) {
+  return (
+    <WhenNear room={ROOM.dose}>
+      <DoseCheckChunk {...props} />
+    </WhenNear>
+  );
+}
 
-export const RecommendationsPanel = dynamic(
-  () => import('../RecommendationsPanel').then((m) => m.RecommendationsPanel),
-  { ssr: false, loading: () => <Skeleton className="h-72 w-full" /> },
-);
-
-export const PublishPanel = dynamic(() => import('@/components/publishing/PublishPanel').then((m) => m.PublishPanel), {
+const RecommendationsChunk = dynamic(() => import('../RecommendationsPanel').then((m) => m.RecommendationsPanel), {
   ssr: false,
-  loading: () => <Skeleton className="h-32 w-full" />,
+  loading: () => <Skeleton className={`${ROOM.recommendations} w-full`} />,
 });
+export function RecommendationsPanel(props: ComponentProps<typeof RecommendationsChunk>) {
+  return (
+    <WhenNear room={ROOM.recommendations}>
+      <RecommendationsChunk {...props} />
+    </WhenNear>
+  );
+}
+
+const PublishChunk = dynamic(() => import('@/components/publishing/PublishPanel').then((m) => m.PublishPanel), {
+  ssr: false,
+  loading: () => <Skeleton className={`${ROOM.publish} w-full`} />,
+});
+export function PublishPanel(props: ComponentProps<typeof PublishChunk>) {
+  return (
+    <WhenNear room={ROOM.publish}>
+      <PublishChunk {...props} />
+    </WhenNear>
+  );
+}

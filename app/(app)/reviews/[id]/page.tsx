@@ -6,7 +6,9 @@ import { Workbench } from '@/components/review/Workbench';
 import { requirePageActor } from '@/lib/auth/current';
 import { decide } from '@/lib/auth/policy';
 import { getWorkbench, reviewAccess } from '@/lib/reviews/queries';
+import { reviewVerdict } from '@/lib/reviews/verdict';
 import { blindRoundFor } from '@/lib/rounds/freeze';
+import { listRounds } from '@/lib/rounds/queries';
 
 type Props = { params: Promise<{ id: string }> };
 
@@ -21,7 +23,15 @@ const load = cache(async (rawId: string) => {
   // Blind scoring: an invited reviewer who has not submitted works on the scorecard, not here.
   const blind = await blindRoundFor(actor.userId, id);
   if (blind) redirect(`/reviews/${id}/round/${blind}`);
-  return { actor, workbench: await getWorkbench(id) };
+  // The first view whole: what the verdict and round routes would answer this reader (the
+  // checks above are theirs: review.read, and not blind), so nothing is fetched after hydration
+  // to fill it in (docs/architecture.md, "The workbench's weight").
+  const [workbench, verdict, rounds] = await Promise.all([
+    getWorkbench(id),
+    reviewVerdict(id),
+    listRounds(id, actor, access),
+  ]);
+  return { actor, workbench, firstView: { verdict: verdict ?? undefined, rounds } };
 });
 
 export async function generateMetadata({ params }: Props): Promise<Metadata> {
@@ -31,6 +41,8 @@ export async function generateMetadata({ params }: Props): Promise<Metadata> {
 
 // GET /reviews/:id — the workbench: editor left, verdict right (stacked on a phone).
 export default async function ReviewWorkbenchPage({ params }: Props) {
-  const { actor, workbench } = await load((await params).id);
-  return <Workbench reviewId={workbench.review.id} viewer={toViewer(actor)} fallback={workbench} />;
+  const { actor, workbench, firstView } = await load((await params).id);
+  return (
+    <Workbench reviewId={workbench.review.id} viewer={toViewer(actor)} fallback={workbench} firstView={firstView} />
+  );
 }
