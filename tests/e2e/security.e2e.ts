@@ -1,6 +1,6 @@
 import type { Page } from 'playwright-core';
 import { describe, expect, inject, it } from 'vitest';
-import { useBrowser } from './browser';
+import { signInByApi, signUpByApi, useBrowser } from './browser';
 
 const browser = useBrowser();
 const baseURL = inject('baseURL');
@@ -71,5 +71,48 @@ describe('the 404 page', () => {
     const html = await second.text();
     expect(html).not.toContain('SECRET-TOKEN-1');
     expect(html).not.toContain('private-thing-one');
+  });
+});
+
+describe('a missing page under a loading state', () => {
+  const get = (path: string, cookie: string) => fetch(`${baseURL}${path}`, { headers: { cookie }, redirect: 'manual' });
+
+  it('a missing review, study or round answers status 404 to a signed-in member, not a 200 that streams the not-found UI', async () => {
+    const owner = await signInByApi('owner@granite-hollow.test', 'loadbearing-demo');
+    const reviews = (await (await get('/api/reviews', owner)).json()) as { reviews: { id: number }[] };
+    const reviewId = reviews.reviews[0].id;
+    for (const path of [
+      '/reviews/999999',
+      '/reviews/999999/rounds',
+      `/reviews/${reviewId}/round/999999`,
+      '/library/999999',
+    ]) {
+      const res = await get(path, owner);
+      expect(res.status, path).toBe(404);
+      expect(await res.text(), path).toMatch(/not found/i);
+    }
+    // Still there for what exists.
+    expect((await get(`/reviews/${reviewId}`, owner)).status).toBe(200);
+  });
+
+  it("another team's review, study and round answer 404 exactly like missing ones", async () => {
+    const owner = await signInByApi('owner@granite-hollow.test', 'loadbearing-demo');
+    const reviewId = ((await (await get('/api/reviews', owner)).json()) as { reviews: { id: number }[] }).reviews[0].id;
+    const studyId = ((await (await get('/api/studies', owner)).json()) as { studies: { id: number }[] }).studies[0].id;
+    const rounds = (await (await get(`/api/reviews/${reviewId}/rounds`, owner)).json()) as { rounds: { id: number }[] };
+    const stranger = (
+      await signUpByApi({
+        name: 'Vera Outside',
+        email: `vera.${Date.now().toString(36)}@elsewhere.test`,
+        password: 'outside-password-1',
+        teamName: 'Elsewhere Club',
+      })
+    ).cookie;
+    const paths = [`/reviews/${reviewId}`, `/reviews/${reviewId}/rounds`, `/library/${studyId}`];
+    if (rounds.rounds[0]) paths.push(`/reviews/${reviewId}/round/${rounds.rounds[0].id}`);
+    for (const path of paths) {
+      const res = await get(path, stranger);
+      expect(res.status, path).toBe(404);
+    }
   });
 });

@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import * as me from '@/app/api/me/route';
 import * as signIn from '@/app/api/auth/sign-in/route';
 import * as signOut from '@/app/api/auth/sign-out/route';
+import * as signUp from '@/app/api/auth/sign-up/route';
 import { mailQueueDrained } from '@/lib/mail/send';
 import { PendingSignUp, User } from '@/models';
 import { Client, useTestApp, signUpConfirmed } from '../../helpers/app';
@@ -28,11 +29,14 @@ describe('sign-up, sign-in, sign-out', () => {
     expect(JSON.stringify(who.body)).not.toMatch(/passwordHash|\$2[aby]\$/);
   });
 
-  it('refuses a second account with the same e-mail (any case) and changes nothing', async () => {
+  it('makes no second account with the same e-mail (any case): the same 202, and the mail says sign in', async () => {
     const before = await User.count();
-    const res = await signUpConfirmed(new Client(), { ...account, email: 'ADA@example.test' });
-    expect(res.status).toBe(409);
+    const res = await new Client().call(signUp.POST, { json: { ...account, email: 'ADA@example.test' } });
+    expect(res.status).toBe(202);
+    expect(res.body).toEqual({ status: 'check-your-mail' });
+    await mailQueueDrained();
     expect(await User.count()).toBe(before);
+    expect(await PendingSignUp.count({ where: { email: 'ada@example.test', usedAt: null } })).toBe(0);
   });
 
   it('signs out and then /api/me is 401', async () => {

@@ -16,7 +16,7 @@ let otherTeamId: string;
 async function inviteAndReadToken(email: string, role: string): Promise<string> {
   const res = await owner.call(members.POST, { params: { teamId }, json: { email, role } });
   expect(res.status).toBe(201);
-  const mail = await app.smtp().waitFor((m) => m.to.includes(email));
+  const mail = await app.smtp().waitFor((m) => m.to.includes(email) && /invited you/.test(m.subject));
   expect(mail.subject).toMatch(/invited you to Crux Lab/);
   expect(mail.html).toContain('href="http://app.test/invitations/');
   return decodeURIComponent(linkIn(mail.text, 'http://app.test/invitations/').split('/').pop()!);
