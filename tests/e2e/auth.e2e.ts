@@ -122,7 +122,7 @@ describe('inviting a colleague', () => {
     await owner.fill('input[name=email]', 'newcoach@example.test');
     await owner.selectOption('select[name=role]', 'coach');
     await owner.getByRole('button', { name: 'Send invitation' }).click();
-    await expect.poll(() => owner.getByText('newcoach@example.test').first().isVisible()).toBe(true);
+    await expect.poll(() => owner.getByText('newcoach@example.test').first().isVisible(), { timeout: 15_000 }).toBe(true);
 
     const mail = await waitForMail((m) => m.to.includes('newcoach@example.test'));
     expect(mail.subject).toContain('Granite Hollow Training Lab');
