@@ -122,7 +122,9 @@ describe('inviting a colleague', () => {
     await owner.fill('input[name=email]', 'newcoach@example.test');
     await owner.selectOption('select[name=role]', 'coach');
     await owner.getByRole('button', { name: 'Send invitation' }).click();
-    await expect.poll(() => owner.getByText('newcoach@example.test').first().isVisible(), { timeout: 15_000 }).toBe(true);
+    await expect
+      .poll(() => owner.getByText('newcoach@example.test').first().isVisible(), { timeout: 15_000 })
+      .toBe(true);
 
     const mail = await waitForMail((m) => m.to.includes('newcoach@example.test'));
     expect(mail.subject).toContain('Granite Hollow Training Lab');
@@ -150,7 +152,12 @@ describe('inviting a colleague', () => {
 
 describe('changing the password', () => {
   const SHOTS = process.env.ACCOUNT_SCREENSHOT_DIR ?? '/tmp';
-  const person = { name: 'Pia Arete', email: 'pia.arete@example.test', password: 'pia-old-password-1', teamName: 'Arete Physio' };
+  const person = {
+    name: 'Pia Arete',
+    email: 'pia.arete@example.test',
+    password: 'pia-old-password-1',
+    teamName: 'Arete Physio',
+  };
 
   it('from the header to the account page: the other session ends, this one stays, the old password is refused', async () => {
     await signUpByApi(person);

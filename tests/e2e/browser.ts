@@ -19,7 +19,10 @@ let counter = 0;
 export function useBrowser() {
   let browser: Browser;
   beforeAll(async () => {
-    browser = await chromium.launch({ executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium', args: CHROMIUM_ARGS });
+    browser = await chromium.launch({
+      executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
+      args: CHROMIUM_ARGS,
+    });
   });
   afterAll(async () => {
     await browser?.close();
@@ -72,7 +75,11 @@ const apiAddress = () => `10.241.${process.pid % 250}.${++apiCounter % 250}`;
 export async function signUpByApi(person: { name: string; email: string; password: string; teamName: string }) {
   const baseURL = inject('baseURL');
   const headers = { 'content-type': 'application/json', 'x-forwarded-for': apiAddress() };
-  const requested = await fetch(`${baseURL}/api/auth/sign-up`, { method: 'POST', headers, body: JSON.stringify(person) });
+  const requested = await fetch(`${baseURL}/api/auth/sign-up`, {
+    method: 'POST',
+    headers,
+    body: JSON.stringify(person),
+  });
   if (requested.status !== 202) throw new Error(`sign-up answered ${requested.status}: ${await requested.text()}`);
   const mail = await waitForMail((m) => m.to.includes(person.email.toLowerCase()) && /Confirm/.test(m.subject));
   const token = new URL(linkFrom(mail, '/sign-up/confirm')).searchParams.get('token');

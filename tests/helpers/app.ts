@@ -53,7 +53,11 @@ export class Client {
     if (opts.rawBody !== undefined) body = opts.rawBody;
     else if (opts.json !== undefined) body = JSON.stringify(opts.json);
     if (body !== undefined) headers.set('content-type', 'application/json');
-    const req = new Request(`http://app.test${opts.path ?? '/api/test'}`, { method: opts.method ?? (body === undefined ? 'GET' : 'POST'), headers, body });
+    const req = new Request(`http://app.test${opts.path ?? '/api/test'}`, {
+      method: opts.method ?? (body === undefined ? 'GET' : 'POST'),
+      headers,
+      body,
+    });
     const res = await handler(req, { params: Promise.resolve(opts.params ?? {}) });
     for (const setCookie of res.headers.getSetCookie()) {
       const [pair] = setCookie.split(';');
@@ -93,6 +97,10 @@ export async function signUpConfirmed(
 
 /** The sign-up link from the newest mail to `email` at the fake relay. */
 export async function signUpToken(smtp: FakeSmtp, email: string, after = 0): Promise<string> {
-  const mail = await smtp.waitFor((m) => smtp.messages.indexOf(m) >= after && m.to.includes(email) && /Confirm/.test(m.subject));
-  return decodeURIComponent(new URL(linkIn(mail.text, 'http://app.test/sign-up/confirm?token=')).searchParams.get('token')!);
+  const mail = await smtp.waitFor(
+    (m) => smtp.messages.indexOf(m) >= after && m.to.includes(email) && /Confirm/.test(m.subject),
+  );
+  return decodeURIComponent(
+    new URL(linkIn(mail.text, 'http://app.test/sign-up/confirm?token=')).searchParams.get('token')!,
+  );
 }

@@ -15,7 +15,9 @@ const password = 'sign-up-password-1';
 const form = (email: string) => ({ name: 'Ines Crag', email, password, teamName: `Crag ${email}` });
 
 /** Status, content type and the exact bytes of the body, as an attacker would compare them. */
-async function rawSignUp(json: unknown): Promise<{ status: number; type: string | null; body: string; cookie: string[] }> {
+async function rawSignUp(
+  json: unknown,
+): Promise<{ status: number; type: string | null; body: string; cookie: string[] }> {
   const res = await signUp.POST(
     new Request('http://app.test/api/auth/sign-up', {
       method: 'POST',
@@ -23,7 +25,12 @@ async function rawSignUp(json: unknown): Promise<{ status: number; type: string 
       body: JSON.stringify(json),
     }),
   );
-  return { status: res.status, type: res.headers.get('content-type'), body: await res.text(), cookie: res.headers.getSetCookie() };
+  return {
+    status: res.status,
+    type: res.headers.get('content-type'),
+    body: await res.text(),
+    cookie: res.headers.getSetCookie(),
+  };
 }
 
 /** A relay that refuses every recipient, as a broken or strict mail provider would. */
@@ -66,9 +73,12 @@ describe('sign-up answers the same for every address', () => {
     const tookMail = app.smtp().messages.filter((m) => m.to.includes('taken@example.test'));
     expect(tookMail.at(-1)!.subject).toBe('You already have a Loadbearing account');
     expect(tookMail.at(-1)!.text).toContain('http://app.test/reset-password');
-    expect(app.smtp().messages.filter((m) => m.to.includes('fresh@example.test')).at(-1)!.subject).toBe(
-      'Confirm your Loadbearing account',
-    );
+    expect(
+      app
+        .smtp()
+        .messages.filter((m) => m.to.includes('fresh@example.test'))
+        .at(-1)!.subject,
+    ).toBe('Confirm your Loadbearing account');
     // Nothing was created for the taken address: one user, no waiting sign-up.
     expect(await User.count({ where: { email: 'taken@example.test' } })).toBe(1);
     expect(await PendingSignUp.count({ where: { email: 'taken@example.test', usedAt: null } })).toBe(0);
@@ -113,7 +123,9 @@ describe('the mailed link creates the account', () => {
     const membership = await Membership.findOne({ where: { userId: res.body.user.id, teamId: res.body.team.id } });
     expect(membership?.role).toBe('owner');
     expect((await client.call(me.GET)).status).toBe(200);
-    const signedIn = await new Client('10.5.1.1').call(signIn.POST, { json: { email: 'newbie@example.test', password } });
+    const signedIn = await new Client('10.5.1.1').call(signIn.POST, {
+      json: { email: 'newbie@example.test', password },
+    });
     expect(signedIn.status).toBe(200);
   });
 
