@@ -3,6 +3,8 @@ import { linkFrom, signInByApi, signUpByApi, useBrowser, waitForMail } from './b
 
 const browser = useBrowser();
 const DEMO_PASSWORD = 'loadbearing-demo';
+// A form's answer waits on password hashing (bcrypt), slow when the machine is busy.
+const SLOW = { timeout: 15_000 };
 
 async function signIn(page: import('playwright-core').Page, email: string, password: string) {
   await page.goto('/sign-in');
@@ -21,14 +23,14 @@ describe('signing up, in and out', () => {
     await page.fill('input[name=password]', 'rhea-password-1');
     await page.fill('input[name=teamName]', 'Ledge Strength Club');
     await page.getByRole('button', { name: 'Create account' }).click();
-    await expect.poll(() => page.getByRole('heading', { name: 'Check your mail' }).isVisible()).toBe(true);
+    await expect.poll(() => page.getByRole('heading', { name: 'Check your mail' }).isVisible(), SLOW).toBe(true);
     expect(await page.getByTestId('check-your-mail').textContent()).toContain('rhea@example.test');
     expect(new URL(page.url()).pathname).toBe('/sign-up');
 
     const mail = await waitForMail((m) => m.to.includes('rhea@example.test') && /Confirm/.test(m.subject));
     const link = linkFrom(mail, '/sign-up/confirm');
     await page.goto(link);
-    await expect.poll(() => page.getByText('Ledge Strength Club').first().isVisible()).toBe(true);
+    await expect.poll(() => page.getByText('Ledge Strength Club').first().isVisible(), SLOW).toBe(true);
     await page.getByRole('button', { name: 'Create my account and team' }).click();
     await page.waitForURL('**/dashboard');
     await expect.poll(() => page.getByRole('heading', { name: 'Dashboard' }).isVisible()).toBe(true);
@@ -37,7 +39,9 @@ describe('signing up, in and out', () => {
     // The link is spent: opened again it says so, in a browser that is not signed in.
     const other = await (await browser.newContext()).newPage();
     await other.goto(link);
-    await expect.poll(() => other.getByRole('heading', { name: 'This link was already used' }).isVisible()).toBe(true);
+    await expect
+      .poll(() => other.getByRole('heading', { name: 'This link was already used' }).isVisible(), SLOW)
+      .toBe(true);
     await other.context().close();
     await context.close();
   });
@@ -51,7 +55,7 @@ describe('signing up, in and out', () => {
     await page.fill('input[name=password]', 'another-password-1');
     await page.fill('input[name=teamName]', 'A Second Team');
     await page.getByRole('button', { name: 'Create account' }).click();
-    await expect.poll(() => page.getByRole('heading', { name: 'Check your mail' }).isVisible()).toBe(true);
+    await expect.poll(() => page.getByRole('heading', { name: 'Check your mail' }).isVisible(), SLOW).toBe(true);
     const mail = await waitForMail((m) => m.to.includes('owner@granite-hollow.test') && /already have/.test(m.subject));
     expect(mail.text).toContain('/reset-password');
     // "Use a different address" goes back to the form with what was typed, but the password.
@@ -177,12 +181,12 @@ describe('changing the password', () => {
     await page.fill('input[name=currentPassword]', 'not-my-password');
     await page.fill('input[name=newPassword]', 'pia-new-password-2');
     await page.getByRole('button', { name: 'Change password' }).click();
-    await expect.poll(() => page.getByText('This is not your current password.').isVisible()).toBe(true);
+    await expect.poll(() => page.getByText('This is not your current password.').isVisible(), SLOW).toBe(true);
 
     await page.fill('input[name=currentPassword]', person.password);
     await page.fill('input[name=newPassword]', 'pia-new-password-2');
     await page.getByRole('button', { name: 'Change password' }).click();
-    await expect.poll(() => page.getByText(/Your password is changed/).isVisible()).toBe(true);
+    await expect.poll(() => page.getByText(/Your password is changed/).isVisible(), SLOW).toBe(true);
     await page.screenshot({ path: `${SHOTS}/account-password-1280.png`, fullPage: true });
 
     // This browser is still signed in; the other session is not.
