@@ -17,8 +17,8 @@ export function CheckYourMail({ email, onChangeAddress }: { email: string; onCha
       <div role="status" aria-live="polite" className="space-y-2">
         <h2 className="text-lg font-semibold">Check your mail</h2>
         <p>
-          We sent a message to <strong className="break-all">{email}</strong>. Open the link in it within 24 hours
-          to create your account and your team.
+          We sent a message to <strong className="break-all">{email}</strong>. Open the link in it within 24 hours to
+          create your account and your team.
         </p>
         <p className="text-ink-muted text-sm">
           If this address already has an account, the message says so instead: sign in, or reset the password.

@@ -32,7 +32,9 @@ export function AppHeader({ user, nav }: { user: { name: string; email: string }
                 {initials(user.name)}
               </span>
               <span className="sr-only sm:not-sr-only sm:block sm:min-w-0 sm:text-right">
-                <span className="text-ink block truncate text-sm font-semibold underline-offset-2 hover:underline">{user.name}</span>
+                <span className="text-ink block truncate text-sm font-semibold underline-offset-2 hover:underline">
+                  {user.name}
+                </span>
                 <span className="text-ink-muted block truncate text-xs">{user.email}</span>
               </span>
             </Link>

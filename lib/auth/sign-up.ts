@@ -68,7 +68,12 @@ export function resendSignUp(email: string): void {
     const appUrl = env().APP_URL;
     const user = await User.findOne({ where: { email } });
     if (user) {
-      return accountExistsMail({ to: user.email, name: user.name, signInUrl: `${appUrl}/sign-in`, resetUrl: `${appUrl}/reset-password` });
+      return accountExistsMail({
+        to: user.email,
+        name: user.name,
+        signInUrl: `${appUrl}/sign-in`,
+        resetUrl: `${appUrl}/reset-password`,
+      });
     }
     const pending = await PendingSignUp.findOne({
       where: { email, usedAt: null, expiresAt: { [Op.gt]: new Date() } },
@@ -117,7 +122,9 @@ const expiredLink = () =>
  * transaction. The link is spent by a conditional UPDATE inside it, so of two clicks exactly one
  * creates the account and the other gets 409 (docs/architecture.md: check-then-write rules).
  */
-export async function confirmSignUp(token: string): Promise<{ user: PublicUser; team: { id: number; name: string; slug: string } }> {
+export async function confirmSignUp(
+  token: string,
+): Promise<{ user: PublicUser; team: { id: number; name: string; slug: string } }> {
   const record = await PendingSignUp.findOne({ where: { tokenHash: hashToken(token) } });
   if (!record) throw unknownLink();
   if (record.usedAt) throw conflict(USED_LINK);
@@ -137,10 +144,7 @@ export async function confirmSignUp(token: string): Promise<{ user: PublicUser; 
       { transaction },
     );
     // The address's other waiting links are spent with this one.
-    await PendingSignUp.update(
-      { usedAt: new Date() },
-      { where: { email: record.email, usedAt: null }, transaction },
-    );
+    await PendingSignUp.update({ usedAt: new Date() }, { where: { email: record.email, usedAt: null }, transaction });
     const team = await createTeam(record.teamName, user.id, transaction);
     await recordEvent(
       { teamId: team.id, actorId: user.id, action: 'team.created', subjectType: 'team', subjectId: team.id },

@@ -2,7 +2,13 @@ import type { Role } from '@/models/roles';
 import { composeMail } from './layout';
 import type { Mail } from './send';
 
-export function invitationMail(opts: { to: string; teamName: string; inviterName: string; role: Role; url: string }): Mail {
+export function invitationMail(opts: {
+  to: string;
+  teamName: string;
+  inviterName: string;
+  role: Role;
+  url: string;
+}): Mail {
   return {
     to: opts.to,
     subject: `${opts.inviterName} invited you to ${opts.teamName} on Loadbearing`,

@@ -12,8 +12,20 @@ export default async function AccountPage() {
   const user = await findUser(actor.userId);
   return (
     <>
-      <PageHeader title="Your account" description={user && <>Signed in as {user.name} ({user.email}).</>} />
-      <section aria-labelledby="password-heading" className="border-line bg-paper-raised max-w-form rounded-xl border px-5 py-6 sm:px-7">
+      <PageHeader
+        title="Your account"
+        description={
+          user && (
+            <>
+              Signed in as {user.name} ({user.email}).
+            </>
+          )
+        }
+      />
+      <section
+        aria-labelledby="password-heading"
+        className="border-line bg-paper-raised max-w-form rounded-xl border px-5 py-6 sm:px-7"
+      >
         <h2 id="password-heading" className="text-xl font-semibold">
           Change your password
         </h2>

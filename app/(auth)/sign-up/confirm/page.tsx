@@ -9,9 +9,14 @@ export const metadata: Metadata = { title: 'Confirm your account' };
 
 // GET /sign-up/confirm?token= — opening the mailed link only shows it; the button creates the
 // account (a mail scanner that follows links creates nothing).
-export default async function ConfirmSignUpPage({ searchParams }: { searchParams: Promise<{ token?: string | string[] }> }) {
+export default async function ConfirmSignUpPage({
+  searchParams,
+}: {
+  searchParams: Promise<{ token?: string | string[] }>;
+}) {
   const { token } = await searchParams;
-  const link = typeof token === 'string' && token.length >= 10 ? await signUpLinkState(token) : { state: 'unknown' as const };
+  const link =
+    typeof token === 'string' && token.length >= 10 ? await signUpLinkState(token) : { state: 'unknown' as const };
   const signIn = (
     <p>
       Already have an account?{' '}
