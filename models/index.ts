@@ -66,3 +66,4 @@ Follow.belongsTo(Team, { foreignKey: 'teamId', as: 'team' });
 Follow.belongsTo(User, { foreignKey: 'userId', as: 'user' });
 export { Follow, Publication, PublishedVersion };
 export { SignInThrottle } from './sign-in-throttle';
+export { PendingSignUp } from './pending-sign-up';

@@ -4,9 +4,17 @@ import { redirect } from 'next/navigation';
 import { z } from 'zod';
 import { safeNextPath } from '@/components/auth/next-path';
 import { formAction } from '@/lib/auth/action';
-import { authenticate, confirmPasswordReset, requestPasswordReset, signUp } from '@/lib/auth/accounts';
+import { authenticate, confirmPasswordReset, requestPasswordReset } from '@/lib/auth/accounts';
+import { confirmSignUp, requestSignUp, resendSignUp } from '@/lib/auth/sign-up';
 import { acceptInvitation } from '@/lib/teams/invitations';
-import { resetConfirmSchema, resetRequestSchema, signInSchema, signUpSchema } from '@/lib/validation/auth';
+import {
+  resetConfirmSchema,
+  resetRequestSchema,
+  signInSchema,
+  signUpConfirmSchema,
+  signUpResendSchema,
+  signUpSchema,
+} from '@/lib/validation/auth';
 import { startSession, signOut } from '@/lib/auth/sessions';
 
 // The forms carry where to return to and which invitation they answer; the shared schemas don't.
@@ -21,15 +29,21 @@ export const signInAction = formAction(signInSchema.extend({ next }), async (dat
   redirect(safeNextPath(data.next));
 });
 
-export const signUpAction = formAction(signUpSchema.extend({ next }), async (data, { session }) => {
-  const { user } = await signUp({
-    name: data.name,
-    email: data.email,
-    password: data.password,
-    teamName: data.teamName,
-  });
+/** The same answer for every address: what happens next is in the mail (lib/auth/sign-up.ts). */
+export const signUpAction = formAction(signUpSchema.extend({ next }), async (data) => {
+  await requestSignUp({ name: data.name, email: data.email, password: data.password, teamName: data.teamName });
+  return { ok: true, values: { email: data.email, name: data.name, teamName: data.teamName } };
+});
+
+export const resendSignUpAction = formAction(signUpResendSchema, async (data) => {
+  resendSignUp(data.email);
+  return { ok: true, message: `We sent the link to ${data.email} again.`, values: { email: data.email } };
+});
+
+export const confirmSignUpAction = formAction(signUpConfirmSchema, async (data, { session }) => {
+  const { user } = await confirmSignUp(data.token);
   await startSession(session, user.id);
-  redirect(safeNextPath(data.next));
+  redirect('/dashboard');
 });
 
 export const requestResetAction = formAction(resetRequestSchema, async (data) => {

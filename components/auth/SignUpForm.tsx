@@ -1,17 +1,22 @@
 'use client';
 
-import { useActionState } from 'react';
+import { useActionState, useState } from 'react';
 import { signUpAction } from '@/app/(auth)/actions';
 import { FormMessage } from '@/components/ui/FormMessage';
 import { SubmitButton } from '@/components/ui/SubmitButton';
 import { TextField } from '@/components/ui/Field';
+import { CheckYourMail } from './CheckYourMail';
 
 export function SignUpForm({ next }: { next?: string }) {
   const [state, action] = useActionState(signUpAction, {});
+  // "Use a different address" returns to the form, keeping what was typed (but the password).
+  const [leftBehind, setLeftBehind] = useState<object | null>(null);
+  const sentTo = state.ok && state !== leftBehind ? state.values?.email : undefined;
+  if (sentTo) return <CheckYourMail email={sentTo} onChangeAddress={() => setLeftBehind(state)} />;
   return (
     <form action={action} noValidate className="space-y-5">
       {next && <input type="hidden" name="next" value={next} />}
-      <FormMessage state={state} />
+      <FormMessage state={state.ok ? {} : state} />
       <TextField
         label="Your name"
         name="name"
@@ -25,6 +30,7 @@ export function SignUpForm({ next }: { next?: string }) {
         type="email"
         autoComplete="email"
         inputMode="email"
+        help="We send a link there; your account is created when you open it."
         defaultValue={state.values?.email}
         errors={state.errors?.email}
       />

@@ -1,3 +1,4 @@
+import Link from 'next/link';
 import { Logo } from './Logo';
 import { NavLinks, type NavItem } from './NavLinks';
 import { SignOutButton } from './SignOutButton';
@@ -15,21 +16,28 @@ export function AppHeader({ user, nav }: { user: { name: string; email: string }
             </nav>
           </div>
           <div className="flex min-w-0 items-center gap-3">
-            <p className="flex min-w-0 items-center gap-2.5 leading-tight" data-testid="signed-in-user">
-              <span className="sr-only">Signed in as </span>
+            {/* Who is signed in, and the way to their account page (password). */}
+            <Link
+              href="/account"
+              className="hover:bg-granite-100 flex min-w-0 items-center gap-2.5 rounded-md px-1.5 py-1 leading-tight"
+              data-testid="signed-in-user"
+            >
+              <span className="sr-only">Your account: signed in as </span>
               {/* Phones have room for initials only; the full name is still read out. */}
               <span
                 aria-hidden="true"
-                title={`${user.name} (${user.email})`}
+                title={`${user.name} (${user.email}): your account`}
                 className="bg-granite-100 font-display text-granite-800 grid size-9 shrink-0 place-items-center rounded-full text-sm font-semibold sm:hidden"
               >
                 {initials(user.name)}
               </span>
               <span className="sr-only sm:not-sr-only sm:block sm:min-w-0 sm:text-right">
-                <span className="text-ink block truncate text-sm font-semibold">{user.name}</span>
+                <span className="text-ink block truncate text-sm font-semibold underline-offset-2 hover:underline">
+                  {user.name}
+                </span>
                 <span className="text-ink-muted block truncate text-xs">{user.email}</span>
               </span>
-            </p>
+            </Link>
             <SignOutButton />
           </div>
         </div>

@@ -5,6 +5,7 @@ import * as publishing from './20261201-0004-publishing';
 import * as directionAndChecks from './20261202-01-direction-and-checks';
 import * as hardening from './20261202-02-hardening';
 import * as evidenceWatch from './20261202-05-evidence-watch';
+import * as pendingSignUps from './20261203-01-pending-sign-ups';
 
 /**
  * Every migration in the order it runs. Listed by hand (not globbed) so the same list works
@@ -19,4 +20,5 @@ export const migrations = [
   { name: '20261202-01-direction-and-checks', ...directionAndChecks },
   { name: '20261202-02-hardening', ...hardening },
   { name: '20261202-05-evidence-watch', ...evidenceWatch },
+  { name: '20261203-01-pending-sign-ups', ...pendingSignUps },
 ];

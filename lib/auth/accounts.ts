@@ -1,11 +1,9 @@
 import { Op } from 'sequelize';
-import { AppError, badRequest, conflict } from '@/lib/api/errors';
-import { recordEvent } from '@/lib/audit/record';
+import { AppError, badRequest } from '@/lib/api/errors';
 import { db } from '@/lib/db';
 import { env } from '@/lib/env';
 import { passwordResetMail } from '@/lib/mail/templates';
 import { sendMailLater } from '@/lib/mail/send';
-import { createTeam } from '@/lib/teams/teams';
 import { PasswordResetToken, User } from '@/models';
 import { checkPassword, DUMMY_HASH, hashPassword } from './password';
 import { assertNotLimitedAfter, clearFailures, succeeded, takeTry } from './rate-limit';
@@ -21,24 +19,6 @@ export interface PublicUser {
 }
 
 const publicUser = (u: User): PublicUser => ({ id: u.id, name: u.name, email: u.email });
-
-/** Creates the account and its team, the new user as owner. */
-export async function signUp(input: { name: string; email: string; password: string; teamName: string }) {
-  // Hashed first, so a taken address takes as long to answer as a new one.
-  const passwordHash = await hashPassword(input.password);
-  if (await User.count({ where: { email: input.email } })) {
-    throw conflict('An account with that e-mail already exists. Sign in instead, or reset the password.');
-  }
-  return db().transaction(async (transaction) => {
-    const user = await User.create({ name: input.name, email: input.email, passwordHash }, { transaction });
-    const team = await createTeam(input.teamName, user.id, transaction);
-    await recordEvent(
-      { teamId: team.id, actorId: user.id, action: 'team.created', subjectType: 'team', subjectId: team.id },
-      transaction,
-    );
-    return { user: publicUser(user), team: { id: team.id, name: team.name, slug: team.slug } };
-  });
-}
 
 /** Checks e-mail and password under the sign-in rate limit; the same message for either mistake. */
 export async function authenticate(input: { email: string; password: string }, address: string): Promise<PublicUser> {
@@ -103,4 +83,33 @@ const expiredLink = () =>
 export async function findUser(userId: number): Promise<PublicUser | null> {
   const user = await User.findByPk(userId);
   return user ? publicUser(user) : null;
+}
+
+/**
+ * A signed-in person changes their password: the current one is checked under the sign-in rate
+ * limit (lib/auth/rate-limit.ts; a stolen session cannot guess it faster than sign-in could), the
+ * new one is stored, and every session of the person ends (docs/architecture.md, sessions). The
+ * caller starts a fresh session for the browser that made the change.
+ */
+export async function changePassword(
+  userId: number,
+  input: { currentPassword: string; newPassword: string },
+  address: string,
+): Promise<PublicUser> {
+  const user = await User.scope('withPassword').findByPk(userId);
+  if (!user) throw new AppError('unauthorized', 'Sign in to continue.');
+  const counts = await takeTry(user.email, address);
+  if (!(await checkPassword(input.currentPassword, user.passwordHash))) {
+    assertNotLimitedAfter(counts);
+    throw badRequest('Your current password is not right.', [
+      { path: 'currentPassword', message: 'This is not your current password.' },
+    ]);
+  }
+  await succeeded(user.email, address);
+  const passwordHash = await hashPassword(input.newPassword);
+  await db().transaction(async (transaction) => {
+    await User.update({ passwordHash }, { where: { id: userId }, transaction });
+    await endSessions(userId, transaction);
+  });
+  return publicUser(user);
 }

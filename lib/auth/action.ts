@@ -80,6 +80,6 @@ function textFields(formData: FormData): Record<string, string> {
 }
 
 function withoutSecrets(values: Record<string, string>): Record<string, string> {
-  const { password: _password, ...rest } = values;
+  const { password: _password, currentPassword: _current, newPassword: _new, ...rest } = values;
   return rest;
 }

@@ -41,9 +41,20 @@ const pending = new Set<Promise<void>>();
  * an account). A relay failure is logged, never thrown.
  */
 export function sendMailLater(mail: Mail): void {
+  composeMailLater(async () => mail);
+}
+
+/**
+ * Like sendMailLater, for a mail whose recipient and words depend on work that must not show in
+ * the answer either (a sign-up: whether the address has an account decides which mail goes out,
+ * and storing the pending sign-up is a write whose wait would differ). `compose` runs after the
+ * answer; it returns the mail to send, or null for none. A failure is logged, never thrown.
+ */
+export function composeMailLater(compose: () => Promise<Mail | null>): void {
   const sending = new Promise<void>((resolve) => setImmediate(resolve))
-    .then(() => sendMail(mail))
-    .catch((error) => console.error(`Mail to ${mail.to} could not be sent:`, error))
+    .then(compose)
+    .then((mail) => (mail ? sendMail(mail) : undefined))
+    .catch((error) => console.error('A mail sent after the answer failed:', error))
     .finally(() => pending.delete(sending));
   pending.add(sending);
 }

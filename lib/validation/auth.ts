@@ -52,6 +52,25 @@ export const resetConfirmSchema = z.object({
   password: newPassword,
 });
 
+const linkToken = (what: string) =>
+  z.string({ error: `The ${what} link is incomplete.` }).min(10, { error: `The ${what} link is incomplete.` });
+
+export const signUpConfirmSchema = z.object({ token: linkToken('sign-up') });
+
+export const signUpResendSchema = z.object({ email });
+
+export const changePasswordSchema = z
+  .object({
+    currentPassword: z
+      .string({ error: 'Enter your current password.' })
+      .min(1, { error: 'Enter your current password.' }),
+    newPassword,
+  })
+  .refine((v) => v.newPassword !== v.currentPassword, {
+    path: ['newPassword'],
+    error: 'Choose a password different from the current one.',
+  });
+
 export const role = z.enum(ROLES, { error: `Role must be one of: ${ROLES.join(', ')}.` });
 
 export const inviteSchema = z.object({ email, role });

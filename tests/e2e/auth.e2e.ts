@@ -1,8 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { linkFrom, useBrowser, waitForMail } from './browser';
+import { linkFrom, signInByApi, signUpByApi, useBrowser, waitForMail } from './browser';
 
 const browser = useBrowser();
 const DEMO_PASSWORD = 'loadbearing-demo';
+// A form's answer waits on password hashing (bcrypt), slow when the machine is busy.
+const SLOW = { timeout: 15_000 };
 
 async function signIn(page: import('playwright-core').Page, email: string, password: string) {
   await page.goto('/sign-in');
@@ -12,7 +14,7 @@ async function signIn(page: import('playwright-core').Page, email: string, passw
 }
 
 describe('signing up, in and out', () => {
-  it('a new coach signs up and lands on the dashboard with their team', async () => {
+  it('a new coach signs up, opens the mailed link and lands on the dashboard with their team', async () => {
     const context = await browser.newContext();
     const page = await context.newPage();
     await page.goto('/sign-up');
@@ -21,9 +23,53 @@ describe('signing up, in and out', () => {
     await page.fill('input[name=password]', 'rhea-password-1');
     await page.fill('input[name=teamName]', 'Ledge Strength Club');
     await page.getByRole('button', { name: 'Create account' }).click();
+    await expect.poll(() => page.getByRole('heading', { name: 'Check your mail' }).isVisible(), SLOW).toBe(true);
+    expect(await page.getByTestId('check-your-mail').textContent()).toContain('rhea@example.test');
+    expect(new URL(page.url()).pathname).toBe('/sign-up');
+
+    const mail = await waitForMail((m) => m.to.includes('rhea@example.test') && /Confirm/.test(m.subject));
+    const link = linkFrom(mail, '/sign-up/confirm');
+    await page.goto(link);
+    await expect.poll(() => page.getByText('Ledge Strength Club').first().isVisible(), SLOW).toBe(true);
+    await page.getByRole('button', { name: 'Create my account and team' }).click();
     await page.waitForURL('**/dashboard');
     await expect.poll(() => page.getByRole('heading', { name: 'Dashboard' }).isVisible()).toBe(true);
     await expect.poll(() => page.getByText('Ledge Strength Club').filter({ visible: true }).count()).toBeGreaterThan(0);
+
+    // The link is spent: opened again it says so, in a browser that is not signed in.
+    const other = await (await browser.newContext()).newPage();
+    await other.goto(link);
+    await expect
+      .poll(() => other.getByRole('heading', { name: 'This link was already used' }).isVisible(), SLOW)
+      .toBe(true);
+    await other.context().close();
+    await context.close();
+  });
+
+  it('signing up with a taken address shows the same page; the mail there says sign in', async () => {
+    const context = await browser.newContext();
+    const page = await context.newPage();
+    await page.goto('/sign-up');
+    await page.fill('input[name=name]', 'Someone Else');
+    await page.fill('input[name=email]', 'owner@granite-hollow.test');
+    await page.fill('input[name=password]', 'another-password-1');
+    await page.fill('input[name=teamName]', 'A Second Team');
+    await page.getByRole('button', { name: 'Create account' }).click();
+    await expect.poll(() => page.getByRole('heading', { name: 'Check your mail' }).isVisible(), SLOW).toBe(true);
+    const mail = await waitForMail((m) => m.to.includes('owner@granite-hollow.test') && /already have/.test(m.subject));
+    expect(mail.text).toContain('/reset-password');
+    // "Use a different address" goes back to the form with what was typed, but the password.
+    await page.getByRole('button', { name: 'Use a different address' }).click();
+    expect(await page.inputValue('input[name=email]')).toBe('owner@granite-hollow.test');
+    expect(await page.inputValue('input[name=password]')).toBe('');
+    await context.close();
+  });
+
+  it('an unknown sign-up link says it is not valid', async () => {
+    const context = await browser.newContext();
+    const page = await context.newPage();
+    await page.goto('/sign-up/confirm?token=not-a-real-token-at-all');
+    await expect.poll(() => page.getByRole('heading', { name: 'This link is not valid' }).isVisible()).toBe(true);
     await context.close();
   });
 
@@ -80,7 +126,9 @@ describe('inviting a colleague', () => {
     await owner.fill('input[name=email]', 'newcoach@example.test');
     await owner.selectOption('select[name=role]', 'coach');
     await owner.getByRole('button', { name: 'Send invitation' }).click();
-    await expect.poll(() => owner.getByText('newcoach@example.test').first().isVisible()).toBe(true);
+    await expect
+      .poll(() => owner.getByText('newcoach@example.test').first().isVisible(), { timeout: 15_000 })
+      .toBe(true);
 
     const mail = await waitForMail((m) => m.to.includes('newcoach@example.test'));
     expect(mail.subject).toContain('Granite Hollow Training Lab');
@@ -103,5 +151,55 @@ describe('inviting a colleague', () => {
     await expect.poll(() => owner.getByText('Nell Newcoach').first().isVisible()).toBe(true);
     await ownerContext.close();
     await coachContext.close();
+  });
+});
+
+describe('changing the password', () => {
+  const SHOTS = process.env.ACCOUNT_SCREENSHOT_DIR ?? '/tmp';
+  const person = {
+    name: 'Pia Arete',
+    email: 'pia.arete@example.test',
+    password: 'pia-old-password-1',
+    teamName: 'Arete Physio',
+  };
+
+  it('from the header to the account page: the other session ends, this one stays, the old password is refused', async () => {
+    await signUpByApi(person);
+    // A second session of the same person, elsewhere.
+    const elsewhere = await signInByApi(person.email, person.password);
+    expect((await fetch(`${browser.baseURL}/api/me`, { headers: { cookie: elsewhere } })).status).toBe(200);
+
+    const context = await browser.newContext();
+    const page = await context.newPage();
+    await signIn(page, person.email, person.password);
+    await page.waitForURL('**/dashboard');
+    await page.getByTestId('signed-in-user').click();
+    await page.waitForURL('**/account');
+    await expect.poll(() => page.getByRole('heading', { name: 'Change your password' }).isVisible()).toBe(true);
+
+    // A wrong current password is refused beside its field.
+    await page.fill('input[name=currentPassword]', 'not-my-password');
+    await page.fill('input[name=newPassword]', 'pia-new-password-2');
+    await page.getByRole('button', { name: 'Change password' }).click();
+    await expect.poll(() => page.getByText('This is not your current password.').isVisible(), SLOW).toBe(true);
+
+    await page.fill('input[name=currentPassword]', person.password);
+    await page.fill('input[name=newPassword]', 'pia-new-password-2');
+    await page.getByRole('button', { name: 'Change password' }).click();
+    await expect.poll(() => page.getByText(/Your password is changed/).isVisible(), SLOW).toBe(true);
+    await page.screenshot({ path: `${SHOTS}/account-password-1280.png`, fullPage: true });
+
+    // This browser is still signed in; the other session is not.
+    await page.goto('/dashboard');
+    await expect.poll(() => page.getByRole('heading', { name: 'Dashboard' }).isVisible()).toBe(true);
+    expect((await fetch(`${browser.baseURL}/api/me`, { headers: { cookie: elsewhere } })).status).toBe(401);
+    await expect(signInByApi(person.email, person.password)).rejects.toThrow(/401/);
+    expect(await signInByApi(person.email, 'pia-new-password-2')).toMatch(/^loadbearing_session=/);
+
+    await page.setViewportSize({ width: 390, height: 844 });
+    await page.goto('/account');
+    await expect.poll(() => page.getByRole('heading', { name: 'Change your password' }).isVisible()).toBe(true);
+    await page.screenshot({ path: `${SHOTS}/account-password-390.png`, fullPage: true });
+    await context.close();
   });
 });

@@ -19,7 +19,10 @@ let counter = 0;
 export function useBrowser() {
   let browser: Browser;
   beforeAll(async () => {
-    browser = await chromium.launch({ executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium', args: CHROMIUM_ARGS });
+    browser = await chromium.launch({
+      executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
+      args: CHROMIUM_ARGS,
+    });
   });
   afterAll(async () => {
     await browser?.close();
@@ -65,4 +68,50 @@ export async function signInWithForm(page: Page, email: string, password = DEMO_
   await page.fill('input[name=password]', password);
   await page.getByRole('button', { name: 'Sign in' }).click();
   await page.waitForURL('**/dashboard');
+}
+
+/** The session cookie (name=value) from a response's Set-Cookie headers. */
+function sessionCookie(res: Response): string {
+  const cookie = res.headers.getSetCookie().find((c) => c.startsWith('loadbearing_session='));
+  if (!cookie) throw new Error('No session cookie in the answer.');
+  return cookie.split(';')[0];
+}
+
+let apiCounter = 0;
+const apiAddress = () => `10.241.${process.pid % 250}.${++apiCounter % 250}`;
+
+/**
+ * Signs up through the API as a person does: the request, the link from the mail at the fake,
+ * the confirm. Answers the new account's ids and its session cookie.
+ */
+export async function signUpByApi(person: { name: string; email: string; password: string; teamName: string }) {
+  const baseURL = inject('baseURL');
+  const headers = { 'content-type': 'application/json', 'x-forwarded-for': apiAddress() };
+  const requested = await fetch(`${baseURL}/api/auth/sign-up`, {
+    method: 'POST',
+    headers,
+    body: JSON.stringify(person),
+  });
+  if (requested.status !== 202) throw new Error(`sign-up answered ${requested.status}: ${await requested.text()}`);
+  const mail = await waitForMail((m) => m.to.includes(person.email.toLowerCase()) && /Confirm/.test(m.subject));
+  const token = new URL(linkFrom(mail, '/sign-up/confirm')).searchParams.get('token');
+  const confirmed = await fetch(`${baseURL}/api/auth/sign-up/confirm`, {
+    method: 'POST',
+    headers,
+    body: JSON.stringify({ token }),
+  });
+  if (confirmed.status !== 201) throw new Error(`confirm answered ${confirmed.status}: ${await confirmed.text()}`);
+  const body = (await confirmed.json()) as { user: { id: number }; team: { id: number } };
+  return { userId: body.user.id, teamId: body.team.id, cookie: sessionCookie(confirmed) };
+}
+
+/** Signs in through the API; answers the session cookie. */
+export async function signInByApi(email: string, password: string): Promise<string> {
+  const res = await fetch(`${inject('baseURL')}/api/auth/sign-in`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json', 'x-forwarded-for': apiAddress() },
+    body: JSON.stringify({ email, password }),
+  });
+  if (res.status !== 200) throw new Error(`sign-in answered ${res.status}`);
+  return sessionCookie(res);
 }

@@ -1,7 +1,7 @@
 import { inject, beforeAll, describe, expect, it } from 'vitest';
 import type { BrowserContext, Page } from 'playwright-core';
 import sqlite3 from 'sqlite3';
-import { linkFrom, useBrowser, waitForMail } from './browser';
+import { linkFrom, signUpByApi, useBrowser, waitForMail } from './browser';
 
 /**
  * The peer-review journey in chromium: an author opens a round for two reviewers, both get the
@@ -26,17 +26,8 @@ let mechanismIds: number[];
 const userIds: Record<string, number> = {};
 
 async function signUp(person: { name: string; email: string }) {
-  const res = await fetch(`${browser.baseURL}/api/auth/sign-up`, {
-    method: 'POST',
-    headers: {
-      'content-type': 'application/json',
-      'x-forwarded-for': `10.240.${Math.floor(Math.random() * 250)}.${Math.floor(Math.random() * 250)}`,
-    },
-    body: JSON.stringify({ ...person, password: PASSWORD, teamName: `${person.name} Lab` }),
-  });
-  expect(res.status).toBe(201);
-  const body = (await res.json()) as { user: { id: number }; team: { id: number } };
-  return { userId: body.user.id, teamId: body.team.id };
+  const { userId, teamId } = await signUpByApi({ ...person, password: PASSWORD, teamName: `${person.name} Lab` });
+  return { userId, teamId };
 }
 
 /** Adds a member to the author's team straight in the e2e database (the team invitation flow has its own journey in auth.e2e.ts). */

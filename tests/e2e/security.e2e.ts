@@ -1,6 +1,6 @@
 import type { Page } from 'playwright-core';
 import { describe, expect, inject, it } from 'vitest';
-import { useBrowser } from './browser';
+import { signInByApi, signUpByApi, useBrowser } from './browser';
 
 const browser = useBrowser();
 const baseURL = inject('baseURL');
@@ -67,10 +67,80 @@ describe('the 404 page', () => {
   it('is never cached with request data: a second missing path shows nothing of the first', async () => {
     const first = await fetch(`${baseURL}/private-thing-one?token=SECRET-TOKEN-1`);
     expect(first.status).toBe(404);
+    // An unknown address gets the one prerendered 404 page, which holds nothing of any request.
+    expect(await first.text()).not.toContain('private-thing-one');
     const second = await fetch(`${baseURL}/another-missing-page`);
     expect(second.status).toBe(404);
     const html = await second.text();
     expect(html).not.toContain('SECRET-TOKEN-1');
     expect(html).not.toContain('private-thing-one');
+  });
+
+  it("a signed-in person's 404 is rendered for them alone: the next person's shows nothing of it", async () => {
+    const owner = await signInByApi('owner@granite-hollow.test', 'loadbearing-demo');
+    const first = await fetch(`${baseURL}/reviews/987654?token=SECRET-TOKEN-2`, { headers: { cookie: owner } });
+    expect(first.status).toBe(404);
+    // This 404 carries its request — the signed-in name in the header, the path in the router
+    // state — so one kept and served again would show it below: the check can fail.
+    const firstHtml = await first.text();
+    expect(firstHtml).toContain('Maren Holt');
+    expect(firstHtml).toContain('987654');
+    const other = (
+      await signUpByApi({
+        name: 'Lior Nextperson',
+        email: `lior.${Date.now().toString(36)}@elsewhere.test`,
+        password: 'next-person-pass-1',
+        teamName: 'Next Person Club',
+      })
+    ).cookie;
+    const second = await fetch(`${baseURL}/reviews/876543`, { headers: { cookie: other } });
+    expect(second.status).toBe(404);
+    const html = await second.text();
+    expect(html).toContain('Lior Nextperson');
+    for (const leak of ['Maren Holt', 'owner@granite-hollow.test', '987654', 'SECRET-TOKEN-2'])
+      expect(html).not.toContain(leak);
+  });
+});
+
+describe('a missing page under a loading state', () => {
+  const get = (path: string, cookie: string) => fetch(`${baseURL}${path}`, { headers: { cookie }, redirect: 'manual' });
+
+  it('a missing review, study or round answers status 404 to a signed-in member, not a 200 that streams the not-found UI', async () => {
+    const owner = await signInByApi('owner@granite-hollow.test', 'loadbearing-demo');
+    const reviews = (await (await get('/api/reviews', owner)).json()) as { reviews: { id: number }[] };
+    const reviewId = reviews.reviews[0].id;
+    for (const path of [
+      '/reviews/999999',
+      '/reviews/999999/rounds',
+      `/reviews/${reviewId}/round/999999`,
+      '/library/999999',
+    ]) {
+      const res = await get(path, owner);
+      expect(res.status, path).toBe(404);
+      expect(await res.text(), path).toMatch(/not found/i);
+    }
+    // Still there for what exists.
+    expect((await get(`/reviews/${reviewId}`, owner)).status).toBe(200);
+  });
+
+  it("another team's review, study and round answer 404 exactly like missing ones", async () => {
+    const owner = await signInByApi('owner@granite-hollow.test', 'loadbearing-demo');
+    const reviewId = ((await (await get('/api/reviews', owner)).json()) as { reviews: { id: number }[] }).reviews[0].id;
+    const studyId = ((await (await get('/api/studies', owner)).json()) as { studies: { id: number }[] }).studies[0].id;
+    const rounds = (await (await get(`/api/reviews/${reviewId}/rounds`, owner)).json()) as { rounds: { id: number }[] };
+    const stranger = (
+      await signUpByApi({
+        name: 'Vera Outside',
+        email: `vera.${Date.now().toString(36)}@elsewhere.test`,
+        password: 'outside-password-1',
+        teamName: 'Elsewhere Club',
+      })
+    ).cookie;
+    const paths = [`/reviews/${reviewId}`, `/reviews/${reviewId}/rounds`, `/library/${studyId}`];
+    if (rounds.rounds[0]) paths.push(`/reviews/${reviewId}/round/${rounds.rounds[0].id}`);
+    for (const path of paths) {
+      const res = await get(path, stranger);
+      expect(res.status, path).toBe(404);
+    }
   });
 });

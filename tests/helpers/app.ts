@@ -1,4 +1,6 @@
 import { afterAll, beforeAll } from 'vitest';
+import * as signUp from '@/app/api/auth/sign-up/route';
+import * as confirmSignUp from '@/app/api/auth/sign-up/confirm/route';
 import { migrate } from '@/db/migrate';
 import { resetRateLimits } from '@/lib/auth/rate-limit';
 import { db } from '@/lib/db';
@@ -9,11 +11,14 @@ import { stopListening } from '@/lib/search/change-feed';
  * Migrates this file's database and starts a real SMTP fake that the app's mailer sends to.
  * Call once at the top of an integration test file.
  */
+let activeSmtp: FakeSmtp | undefined;
+
 export function useTestApp(): { smtp: () => FakeSmtp } {
   let smtp: FakeSmtp;
   beforeAll(async () => {
     await migrate(db());
     smtp = await startFakeSmtp();
+    activeSmtp = smtp;
     process.env.SMTP_PORT = String(smtp.port);
     await resetRateLimits();
   });
@@ -48,7 +53,11 @@ export class Client {
     if (opts.rawBody !== undefined) body = opts.rawBody;
     else if (opts.json !== undefined) body = JSON.stringify(opts.json);
     if (body !== undefined) headers.set('content-type', 'application/json');
-    const req = new Request(`http://app.test${opts.path ?? '/api/test'}`, { method: opts.method ?? (body === undefined ? 'GET' : 'POST'), headers, body });
+    const req = new Request(`http://app.test${opts.path ?? '/api/test'}`, {
+      method: opts.method ?? (body === undefined ? 'GET' : 'POST'),
+      headers,
+      body,
+    });
     const res = await handler(req, { params: Promise.resolve(opts.params ?? {}) });
     for (const setCookie of res.headers.getSetCookie()) {
       const [pair] = setCookie.split(';');
@@ -64,4 +73,34 @@ export function linkIn(text: string, prefix: string): string {
   const match = text.match(new RegExp(`${prefix.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}\\S+`));
   if (!match) throw new Error(`No link starting with ${prefix} in mail:\n${text}`);
   return match[0];
+}
+
+/**
+ * Signs up the way a person does: POST /api/auth/sign-up, then the link from the mail the fake
+ * relay received, posted to /api/auth/sign-up/confirm by the same client (which is then signed
+ * in). Answers with the confirm call's result: 201 `{user, team}`, or the first failure.
+ */
+export async function signUpConfirmed(
+  client: Client,
+  input: { name: string; email: string; password: string; teamName: string },
+): Promise<CallResult> {
+  const smtp = activeSmtp;
+  if (!smtp) throw new Error('signUpConfirmed needs useTestApp() in the test file.');
+  const before = new Set(smtp.messages);
+  const requested = await client.call(signUp.POST, { json: input });
+  if (requested.status !== 202) return requested;
+  const mail = await smtp.waitFor((m) => !before.has(m) && m.to.includes(input.email.trim().toLowerCase()));
+  const link = linkIn(mail.text, 'http://app.test/sign-up/confirm?token=');
+  const token = decodeURIComponent(new URL(link).searchParams.get('token')!);
+  return client.call(confirmSignUp.POST, { json: { token } });
+}
+
+/** The sign-up link from the newest mail to `email` at the fake relay. */
+export async function signUpToken(smtp: FakeSmtp, email: string, after = 0): Promise<string> {
+  const mail = await smtp.waitFor(
+    (m) => smtp.messages.indexOf(m) >= after && m.to.includes(email) && /Confirm/.test(m.subject),
+  );
+  return decodeURIComponent(
+    new URL(linkIn(mail.text, 'http://app.test/sign-up/confirm?token=')).searchParams.get('token')!,
+  );
 }

@@ -7,14 +7,14 @@ import * as signUp from '@/app/api/auth/sign-up/route';
 import * as member from '@/app/api/teams/[teamId]/members/[membershipId]/route';
 import * as members from '@/app/api/teams/[teamId]/members/route';
 import { db } from '@/lib/db';
-import { Client, useTestApp } from '../../helpers/app';
+import { Client, useTestApp, signUpConfirmed } from '../../helpers/app';
 
 useTestApp();
 const owner = new Client();
 const params: Record<string, string> = {};
 
 beforeAll(async () => {
-  const res = await owner.call(signUp.POST, { json: { name: 'Val Idator', email: 'val@example.test', password: 'valid-password-1', teamName: 'Checks' } });
+  const res = await signUpConfirmed(owner, { name: 'Val Idator', email: 'val@example.test', password: 'valid-password-1', teamName: 'Checks' });
   params.teamId = String(res.body.team.id);
   const list = await owner.call(members.GET, { params: { teamId: params.teamId } });
   params.membershipId = String(list.body.members[0].membershipId);

@@ -3,8 +3,9 @@ import * as me from '@/app/api/me/route';
 import * as signIn from '@/app/api/auth/sign-in/route';
 import * as signOut from '@/app/api/auth/sign-out/route';
 import * as signUp from '@/app/api/auth/sign-up/route';
-import { User } from '@/models';
-import { Client, useTestApp } from '../../helpers/app';
+import { mailQueueDrained } from '@/lib/mail/send';
+import { PendingSignUp, User } from '@/models';
+import { Client, useTestApp, signUpConfirmed } from '../../helpers/app';
 
 useTestApp();
 
@@ -13,7 +14,7 @@ const account = { name: 'Ada Rook', email: 'Ada@Example.test', password: 'correc
 describe('sign-up, sign-in, sign-out', () => {
   it('signs up, creates the team with the user as owner, and signs in', async () => {
     const client = new Client();
-    const res = await client.call(signUp.POST, { json: account });
+    const res = await signUpConfirmed(client, account);
     expect(res.status).toBe(201);
     expect(res.body.user).toEqual({ id: expect.any(Number), name: 'Ada Rook', email: 'ada@example.test' });
     expect(res.body.team.slug).toBe('rook-strength');
@@ -28,11 +29,14 @@ describe('sign-up, sign-in, sign-out', () => {
     expect(JSON.stringify(who.body)).not.toMatch(/passwordHash|\$2[aby]\$/);
   });
 
-  it('refuses a second account with the same e-mail (any case) and changes nothing', async () => {
+  it('makes no second account with the same e-mail (any case): the same 202, and the mail says sign in', async () => {
     const before = await User.count();
     const res = await new Client().call(signUp.POST, { json: { ...account, email: 'ADA@example.test' } });
-    expect(res.status).toBe(409);
+    expect(res.status).toBe(202);
+    expect(res.body).toEqual({ status: 'check-your-mail' });
+    await mailQueueDrained();
     expect(await User.count()).toBe(before);
+    expect(await PendingSignUp.count({ where: { email: 'ada@example.test', usedAt: null } })).toBe(0);
   });
 
   it('signs out and then /api/me is 401', async () => {
@@ -56,7 +60,7 @@ describe('sign-up, sign-in, sign-out', () => {
 
   it('rate-limits per e-mail: the 6th attempt after 5 failures is 429 with Retry-After, even with the right password', async () => {
     const email = 'limit@example.test';
-    await new Client().call(signUp.POST, { json: { ...account, email } });
+    await signUpConfirmed(new Client(), { ...account, email });
     for (let i = 0; i < 5; i++) {
       // Each try from a different address, so only the per-e-mail counter can trip.
       const res = await new Client(`10.1.0.${i}`).call(signIn.POST, { json: { email, password: 'wrong-password' } });

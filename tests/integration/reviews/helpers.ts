@@ -2,12 +2,11 @@ import { mkdtempSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll } from 'vitest';
-import * as signUp from '@/app/api/auth/sign-up/route';
 import { startFakeDoiServer, type FakeDoiServer } from '@/lib/citations/fake-doi-server';
 import { db } from '@/lib/db';
 import { Membership } from '@/models';
 import type { Role } from '@/models/roles';
-import { Client, type CallResult } from '../../helpers/app';
+import { Client, signUpConfirmed, type CallResult } from '../../helpers/app';
 
 /**
  * Shared set-up of the workbench's integration tests: a team with one person in every role, an
@@ -35,13 +34,11 @@ const nextAddress = () => `10.77.${Math.floor(addressCounter / 250)}.${(addressC
 
 async function person(tag: string, name: string): Promise<{ client: Client; userId: number; teamId: number }> {
   const client = new Client(nextAddress());
-  const res = await client.call(signUp.POST, {
-    json: {
-      name,
-      email: `${name.toLowerCase().replace(/\W+/g, '.')}.${tag}@example.test`,
-      password: 'long-enough-pass-1',
-      teamName: `${name} ${tag}`,
-    },
+  const res = await signUpConfirmed(client, {
+    name,
+    email: `${name.toLowerCase().replace(/\W+/g, '.')}.${tag}@example.test`,
+    password: 'long-enough-pass-1',
+    teamName: `${name} ${tag}`,
   });
   if (res.status !== 201) throw new Error(`sign-up failed: ${JSON.stringify(res.body)}`);
   return { client, userId: res.body.user.id, teamId: res.body.team.id };

@@ -3,10 +3,9 @@ import * as confirm from '@/app/api/auth/password-reset/confirm/route';
 import * as reset from '@/app/api/auth/password-reset/route';
 import * as signIn from '@/app/api/auth/sign-in/route';
 import * as signOut from '@/app/api/auth/sign-out/route';
-import * as signUp from '@/app/api/auth/sign-up/route';
 import * as me from '@/app/api/me/route';
 import { SignInThrottle } from '@/models';
-import { Client, linkIn, useTestApp } from '../../helpers/app';
+import { Client, linkIn, useTestApp, signUpConfirmed } from '../../helpers/app';
 
 // A session ends on the server, not only in the browser that holds the cookie.
 const app = useTestApp();
@@ -14,7 +13,7 @@ const password = 'a-long-password-1';
 
 async function account(email: string): Promise<Client> {
   const client = new Client();
-  const res = await client.call(signUp.POST, { json: { name: 'Sela Vik', email, password, teamName: `Lab ${email}` } });
+  const res = await signUpConfirmed(client, { name: 'Sela Vik', email, password, teamName: `Lab ${email}` });
   expect(res.status).toBe(201);
   return client;
 }

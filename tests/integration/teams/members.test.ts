@@ -2,11 +2,10 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import * as accept from '@/app/api/invitations/[token]/accept/route';
 import * as invitation from '@/app/api/invitations/[token]/route';
 import * as me from '@/app/api/me/route';
-import * as signUp from '@/app/api/auth/sign-up/route';
 import * as member from '@/app/api/teams/[teamId]/members/[membershipId]/route';
 import * as members from '@/app/api/teams/[teamId]/members/route';
 import { AuditEvent, Membership } from '@/models';
-import { Client, linkIn, useTestApp } from '../../helpers/app';
+import { Client, linkIn, useTestApp, signUpConfirmed } from '../../helpers/app';
 
 const app = useTestApp();
 const owner = new Client();
@@ -17,15 +16,15 @@ let otherTeamId: string;
 async function inviteAndReadToken(email: string, role: string): Promise<string> {
   const res = await owner.call(members.POST, { params: { teamId }, json: { email, role } });
   expect(res.status).toBe(201);
-  const mail = await app.smtp().waitFor((m) => m.to.includes(email));
+  const mail = await app.smtp().waitFor((m) => m.to.includes(email) && /invited you/.test(m.subject));
   expect(mail.subject).toMatch(/invited you to Crux Lab/);
   expect(mail.html).toContain('href="http://app.test/invitations/');
   return decodeURIComponent(linkIn(mail.text, 'http://app.test/invitations/').split('/').pop()!);
 }
 
 beforeAll(async () => {
-  teamId = String((await owner.call(signUp.POST, { json: { name: 'Olga Owner', email: 'olga@example.test', password: 'owner-password-1', teamName: 'Crux Lab' } })).body.team.id);
-  otherTeamId = String((await outsider.call(signUp.POST, { json: { name: 'Otto Other', email: 'otto@example.test', password: 'other-password-1', teamName: 'Other Lab' } })).body.team.id);
+  teamId = String((await signUpConfirmed(owner, { name: 'Olga Owner', email: 'olga@example.test', password: 'owner-password-1', teamName: 'Crux Lab' })).body.team.id);
+  otherTeamId = String((await signUpConfirmed(outsider, { name: 'Otto Other', email: 'otto@example.test', password: 'other-password-1', teamName: 'Other Lab' })).body.team.id);
 });
 
 describe('invitations', () => {
@@ -53,7 +52,7 @@ describe('invitations', () => {
   });
 
   it('a signed-out visitor whose e-mail has an account is told to sign in, and nothing changes', async () => {
-    await new Client().call(signUp.POST, { json: { name: 'Dana Dup', email: 'dana@example.test', password: 'dana-password-1', teamName: 'Dana Lab' } });
+    await signUpConfirmed(new Client(), { name: 'Dana Dup', email: 'dana@example.test', password: 'dana-password-1', teamName: 'Dana Lab' });
     const token = await inviteAndReadToken('dana@example.test', 'athlete');
     const before = await Membership.count();
     const res = await new Client().call(accept.POST, { params: { token }, json: { name: 'Dana Again', password: 'dana-password-2' } });
@@ -81,7 +80,7 @@ describe('members', () => {
     expect((await cora.call(members.POST, { params: { teamId }, json: { email: 'z@example.test', role: 'coach' } })).status).toBe(403);
 
     const stranger = new Client();
-    await stranger.call(signUp.POST, { json: { name: 'Sam Stranger', email: 'sam@example.test', password: 'stranger-password', teamName: 'Far Away' } });
+    await signUpConfirmed(stranger, { name: 'Sam Stranger', email: 'sam@example.test', password: 'stranger-password', teamName: 'Far Away' });
     expect((await stranger.call(members.GET, { params: { teamId } })).status).toBe(404);
     expect((await new Client().call(members.GET, { params: { teamId } })).status).toBe(401);
   });

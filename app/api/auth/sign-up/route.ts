@@ -1,11 +1,10 @@
-import { signUp } from '@/lib/auth/accounts';
 import { route } from '@/lib/auth/handler';
+import { requestSignUp } from '@/lib/auth/sign-up';
 import { signUpSchema } from '@/lib/validation/auth';
-import { startSession } from '@/lib/auth/sessions';
 
-// POST /api/auth/sign-up — creates an account and its team (the new user is owner), signs in.
-export const POST = route({ auth: 'optional', body: signUpSchema }, async ({ body, session }) => {
-  const result = await signUp(body);
-  await startSession(session, result.user.id);
-  return Response.json(result, { status: 201 });
+// POST /api/auth/sign-up — 202, the same answer for every address; the mail (a link, or "you
+// already have an account") goes out after it (lib/auth/sign-up.ts).
+export const POST = route({ auth: 'optional', body: signUpSchema }, async ({ body }) => {
+  await requestSignUp(body);
+  return Response.json({ status: 'check-your-mail' }, { status: 202 });
 });

@@ -1,22 +1,14 @@
 import type { Metadata } from 'next';
-import { notFound } from 'next/navigation';
 import { cache } from 'react';
 import { ScorecardPage } from '@/components/rounds/ScorecardPage';
-import { requirePageActor } from '@/lib/auth/current';
-import { decide } from '@/lib/auth/policy';
-import { roundAccess } from '@/lib/rounds/access';
+import { invitedRound } from '@/lib/auth/page-gates';
 import { scorecardView } from '@/lib/rounds/queries';
 
 type Props = { params: Promise<{ id: string; roundId: string }> };
 
-/** The blind scorecard when the signed-in person is invited to this round; anyone else gets 404. */
+/** The blind scorecard; the layout has already answered 404 to anyone not invited to this round. */
 const load = cache(async (rawId: string, rawRound: string) => {
-  const id = Number(rawId);
-  const roundId = Number(rawRound);
-  if (!Number.isInteger(id) || id <= 0 || !Number.isInteger(roundId) || roundId <= 0) notFound();
-  const actor = await requirePageActor(`/reviews/${rawId}/round/${rawRound}`);
-  const access = await roundAccess(id, roundId, actor.userId).catch(() => null);
-  if (!access || decide(actor, 'review.round.scorecard', access) !== 'allow') notFound();
+  const { actor, access } = await invitedRound(rawId, rawRound);
   return scorecardView(access.round, actor, access);
 });
 

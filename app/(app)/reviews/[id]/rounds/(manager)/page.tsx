@@ -1,28 +1,20 @@
 import type { Metadata } from 'next';
-import { notFound, redirect } from 'next/navigation';
 import { cache } from 'react';
 import { RoundsManager } from '@/components/rounds/RoundsManager';
-import { requirePageActor } from '@/lib/auth/current';
-import { decide } from '@/lib/auth/policy';
+import { roundsManagerAccess } from '@/lib/auth/page-gates';
 import { listRounds, reviewHeadline } from '@/lib/rounds/queries';
-import { getWorkbench, reviewAccess } from '@/lib/reviews/queries';
+import { getWorkbench } from '@/lib/reviews/queries';
 
 type Props = { params: Promise<{ id: string }> };
 
-/** The author's and owner's round page; an invited reviewer is sent to their scorecard; anyone else 404. */
+/** The author's and owner's round page; the layout has already sent anyone else away or to 404. */
 const load = cache(async (rawId: string) => {
-  const id = Number(rawId);
-  if (!Number.isInteger(id) || id <= 0) notFound();
-  const actor = await requirePageActor(`/reviews/${rawId}/rounds`);
-  const access = await reviewAccess(id).catch(() => null);
-  if (!access || decide(actor, 'review.read', access) !== 'allow') notFound();
-  const list = await listRounds(id, actor, access);
-  if (decide(actor, 'review.round.settle', access) !== 'allow') {
-    const mine = list.rounds[0];
-    if (mine) redirect(`/reviews/${id}/round/${mine.id}`);
-    notFound();
-  }
-  const [headline, workbench] = await Promise.all([reviewHeadline(id), getWorkbench(id)]);
+  const { id, actor, access } = await roundsManagerAccess(rawId);
+  const [list, headline, workbench] = await Promise.all([
+    listRounds(id, actor, access),
+    reviewHeadline(id),
+    getWorkbench(id),
+  ]);
   return { id, list, headline, mechanisms: workbench.mechanisms.map((m) => ({ id: m.id, name: m.name })) };
 });
 

@@ -1,25 +1,19 @@
 import type { Metadata } from 'next';
-import { notFound, redirect } from 'next/navigation';
+import { redirect } from 'next/navigation';
 import { cache } from 'react';
 import { toViewer } from '@/components/review/viewer';
 import { Workbench } from '@/components/review/Workbench';
-import { requirePageActor } from '@/lib/auth/current';
-import { decide } from '@/lib/auth/policy';
-import { getWorkbench, reviewAccess } from '@/lib/reviews/queries';
+import { readableReview } from '@/lib/auth/page-gates';
+import { getWorkbench } from '@/lib/reviews/queries';
 import { reviewVerdict } from '@/lib/reviews/verdict';
 import { blindRoundFor } from '@/lib/rounds/freeze';
 import { listRounds } from '@/lib/rounds/queries';
 
 type Props = { params: Promise<{ id: string }> };
 
-/** The workbench data when the review exists and the signed-in person may read it; else 404. */
+/** The workbench data; the layout has already answered 404 when the review is missing or not theirs. */
 const load = cache(async (rawId: string) => {
-  const id = Number(rawId);
-  if (!Number.isInteger(id) || id <= 0) notFound();
-  const actor = await requirePageActor(`/reviews/${rawId}`);
-  const access = await reviewAccess(id).catch(() => null);
-  // Another team's review answers like a missing one: its existence is not confirmed.
-  if (!access || decide(actor, 'review.read', access) !== 'allow') notFound();
+  const { id, actor, access } = await readableReview(rawId, `/reviews/${rawId}`);
   // Blind scoring: an invited reviewer who has not submitted works on the scorecard, not here.
   const blind = await blindRoundFor(actor.userId, id);
   if (blind) redirect(`/reviews/${id}/round/${blind}`);
