@@ -83,7 +83,8 @@ describe('following a team', () => {
       json: { visibility: 'public', changeNote: 'Added a study.' },
     });
     expect(r2.body.notified).toBe(1);
-    const mail = await app.smtp().waitFor((m) => m.to.includes(outsiderEmail));
+    // The outsider's first mail confirmed their sign-up; this one is about the verdict.
+    const mail = await app.smtp().waitFor((m) => m.to.includes(outsiderEmail) && !/^Confirm/.test(m.subject));
     expect(mail.subject).toMatch(/version 2/);
     expect(mail.text).toContain('What changed: Added a study.');
     expect(mailsTo(outsiderEmail).some((m) => m.text.includes('warm-up hangs'))).toBe(false);
