@@ -15,7 +15,7 @@ import { Appraisal, Mechanism, Review, Study } from '@/models';
 import { deriveAppraisal } from './derive';
 import { directionReasonIssue, suggestedDirectionFor } from './direction-check';
 import { targetDesirable } from './meta';
-import { reviewDTO } from './queries';
+import { reviewDTO, reviewWithAuthor } from './queries';
 import { appraisalFacts, targetFacts, toAppraisalDTO, toMechanismDTO } from './rows';
 import type { AppraisalDTO, MechanismDTO, ReviewDTO } from './types';
 import { uniqueOrConflict, writeTransaction } from './transaction';
@@ -85,12 +85,18 @@ export async function createReview(authorId: number, input: CreateReviewInput): 
   return reviewDTO(review);
 }
 
-export type UpdateOutcome = { ok: true; review: ReviewDTO } | { ok: false; current: ReviewDTO };
+export type UpdateOutcome = { ok: true; review: ReviewDTO; row: Review } | { ok: false; current: ReviewDTO };
 
 /**
  * Optimistic locking: the update applies only where the stored version equals the one the
  * editor read (one UPDATE … WHERE version = ?, so two saves cannot both win), and bumps it.
  * A stale version changes nothing and returns the current review for the editor to offer.
+ *
+ * An autosave of text (title, claim, body, recommendations, tags) is that one conditional
+ * UPDATE and nothing else: a single statement is atomic on both engines, so it takes no
+ * transaction and no lock, and saves of different reviews never wait for each other. A change
+ * of protocol or population (the verdict is recomputed from it) or of status (an audit event)
+ * runs in a write transaction scoped to the review (lib/reviews/transaction.ts).
  */
 export async function updateReview(
   reviewId: number,
@@ -103,33 +109,43 @@ export async function updateReview(
     values.populationStatus = population.status;
     values.populationInjured = population.injured;
   }
-  const teamId = (await Review.findByPk(reviewId, { attributes: ['teamId'] }))?.teamId ?? null;
-  const changed = await writeTransaction(async (transaction) => {
-    const [count] = await Review.update(
+  const conditional = (transaction?: Transaction) =>
+    Review.update(
       { ...values, version: db().literal('version + 1') as unknown as number },
       { where: { id: reviewId, version }, transaction },
     );
-    if (count === 0) return false;
-    // Protocol and population change every appraisal's applicability, hence the verdict.
-    if (input.protocol || population) await refreshVerdict(reviewId, { transaction });
-    if (input.status)
-      await recordEvent(
-        {
-          teamId,
-          actorId,
-          action: 'review.status_changed',
-          subjectType: 'review',
-          subjectId: reviewId,
-          data: { status: input.status },
-        },
-        transaction,
-      );
-    return true;
-  });
-  const current = await Review.findByPk(reviewId);
+  const changed =
+    !input.protocol && !population && !input.status
+      ? (await conditional())[0] > 0
+      : await writeTransaction(
+          async (transaction) => {
+            const [count] = await conditional(transaction);
+            if (count === 0) return false;
+            // Protocol and population change every appraisal's applicability, hence the verdict.
+            if (input.protocol || population) await refreshVerdict(reviewId, { transaction });
+            if (input.status) {
+              const teamId =
+                (await Review.findByPk(reviewId, { attributes: ['teamId'], transaction }))?.teamId ?? null;
+              await recordEvent(
+                {
+                  teamId,
+                  actorId,
+                  action: 'review.status_changed',
+                  subjectType: 'review',
+                  subjectId: reviewId,
+                  data: { status: input.status },
+                },
+                transaction,
+              );
+            }
+            return true;
+          },
+          { reviewId },
+        );
+  const current = await reviewWithAuthor(reviewId);
   // Deleted between the policy check and the update.
   if (!current) throw notFound('That review');
-  return changed ? { ok: true, review: await reviewDTO(current) } : { ok: false, current: await reviewDTO(current) };
+  return changed ? { ok: true, review: current.dto, row: current.row } : { ok: false, current: current.dto };
 }
 
 export async function deleteReview(reviewId: number, actorId: number): Promise<void> {
