@@ -124,8 +124,7 @@ export async function updateReview(
             // Protocol and population change every appraisal's applicability, hence the verdict.
             if (input.protocol || population) await refreshVerdict(reviewId, { transaction });
             if (input.status) {
-              const teamId =
-                (await Review.findByPk(reviewId, { attributes: ['teamId'], transaction }))?.teamId ?? null;
+              const teamId = (await Review.findByPk(reviewId, { attributes: ['teamId'], transaction }))?.teamId ?? null;
               await recordEvent(
                 {
                   teamId,
@@ -184,39 +183,48 @@ async function shiftFrom(reviewId: number, position: number, transaction: Transa
 }
 
 export async function createMechanism(reviewId: number, input: MechanismInput): Promise<MechanismDTO> {
-  return writeTransaction(async (transaction) => {
-    const last = (await Mechanism.max('position', { where: { reviewId }, transaction })) as number | null;
-    const end = last === null ? 0 : last + 1;
-    const position = input.position === undefined ? end : Math.min(input.position, end);
-    if (position < end) await shiftFrom(reviewId, position, transaction);
-    const mechanism = await Mechanism.create({ ...input, reviewId, position }, { transaction });
-    await refreshVerdict(reviewId, { transaction, touch: true });
-    return toMechanismDTO(mechanism);
-  });
+  return writeTransaction(
+    async (transaction) => {
+      const last = (await Mechanism.max('position', { where: { reviewId }, transaction })) as number | null;
+      const end = last === null ? 0 : last + 1;
+      const position = input.position === undefined ? end : Math.min(input.position, end);
+      if (position < end) await shiftFrom(reviewId, position, transaction);
+      const mechanism = await Mechanism.create({ ...input, reviewId, position }, { transaction });
+      await refreshVerdict(reviewId, { transaction, touch: true });
+      return toMechanismDTO(mechanism);
+    },
+    { reviewId },
+  );
 }
 
 export async function updateMechanism(mechanism: Mechanism, input: MechanismUpdateInput): Promise<MechanismDTO> {
-  return writeTransaction(async (transaction) => {
-    if (input.position !== undefined && input.position !== mechanism.position) {
-      await shiftFrom(mechanism.reviewId, input.position, transaction, mechanism.id);
-    }
-    await mechanism.update(input, { transaction });
-    await refreshVerdict(mechanism.reviewId, { transaction, touch: true });
-    return toMechanismDTO(mechanism);
-  });
+  return writeTransaction(
+    async (transaction) => {
+      if (input.position !== undefined && input.position !== mechanism.position) {
+        await shiftFrom(mechanism.reviewId, input.position, transaction, mechanism.id);
+      }
+      await mechanism.update(input, { transaction });
+      await refreshVerdict(mechanism.reviewId, { transaction, touch: true });
+      return toMechanismDTO(mechanism);
+    },
+    { reviewId: mechanism.reviewId },
+  );
 }
 
 /** Deletes the mechanism and its appraisals (the body's mechanism block is the editor's to remove). */
 export async function deleteMechanism(
   mechanism: Mechanism,
 ): Promise<{ mechanism: MechanismDTO; deletedAppraisals: number }> {
-  return writeTransaction(async (transaction) => {
-    const deletedAppraisals = await Appraisal.destroy({ where: { mechanismId: mechanism.id }, transaction });
-    const dto = toMechanismDTO(mechanism);
-    await mechanism.destroy({ transaction });
-    await refreshVerdict(mechanism.reviewId, { transaction, touch: true });
-    return { mechanism: dto, deletedAppraisals };
-  });
+  return writeTransaction(
+    async (transaction) => {
+      const deletedAppraisals = await Appraisal.destroy({ where: { mechanismId: mechanism.id }, transaction });
+      const dto = toMechanismDTO(mechanism);
+      await mechanism.destroy({ transaction });
+      await refreshVerdict(mechanism.reviewId, { transaction, touch: true });
+      return { mechanism: dto, deletedAppraisals };
+    },
+    { reviewId: mechanism.reviewId },
+  );
 }
 
 // ---------------------------------------------------------------------------------------------
@@ -288,7 +296,11 @@ async function checkDirectionReason(
 }
 
 /** The written appraisal as the verdict's refresh graded it, so a write grades it once. */
-async function refreshAndDescribe(review: Review, appraisal: Appraisal, transaction: Transaction): Promise<AppraisalDTO> {
+async function refreshAndDescribe(
+  review: Review,
+  appraisal: Appraisal,
+  transaction: Transaction,
+): Promise<AppraisalDTO> {
   const scored = await refreshVerdict(review.id, { transaction, touch: true });
   const derived = scored?.derived.get(appraisal.id);
   if (!derived) throw new Error(`Appraisal ${appraisal.id} was not graded with its review.`);
@@ -296,13 +308,16 @@ async function refreshAndDescribe(review: Review, appraisal: Appraisal, transact
 }
 
 export async function createAppraisal(review: Review, input: AppraisalInput): Promise<AppraisalDTO> {
-  return writeTransaction(async (transaction) => {
-    const study = await checkReferences(review, input.studyId, input.mechanismId, transaction);
-    await checkDirectionReason(review, study, input, transaction);
-    await assertNotAppraisedTwice(review.id, input.studyId, input.mechanismId, transaction);
-    const appraisal = await Appraisal.create({ ...input, reviewId: review.id }, { transaction });
-    return refreshAndDescribe(review, appraisal, transaction);
-  });
+  return writeTransaction(
+    async (transaction) => {
+      const study = await checkReferences(review, input.studyId, input.mechanismId, transaction);
+      await checkDirectionReason(review, study, input, transaction);
+      await assertNotAppraisedTwice(review.id, input.studyId, input.mechanismId, transaction);
+      const appraisal = await Appraisal.create({ ...input, reviewId: review.id }, { transaction });
+      return refreshAndDescribe(review, appraisal, transaction);
+    },
+    { reviewId: review.id },
+  );
 }
 
 export async function updateAppraisal(
@@ -319,35 +334,41 @@ export async function updateAppraisal(
   if (issue) throw badRequest(issue.message, [issue]);
   const studyId = input.studyId ?? appraisal.studyId;
   const mechanismId = input.mechanismId !== undefined ? input.mechanismId : appraisal.mechanismId;
-  return writeTransaction(async (transaction) => {
-    const study = await checkReferences(review, studyId, mechanismId, transaction);
-    await assertNotAppraisedTwice(review.id, studyId, mechanismId, transaction, appraisal.id);
-    await checkDirectionReason(
-      review,
-      study,
-      {
-        direction: input.direction ?? appraisal.direction,
-        directionReason: input.directionReason !== undefined ? input.directionReason : appraisal.directionReason,
-        mechanismId,
-      },
-      transaction,
-    );
-    // Clearing the override clears its reason with it; a save by a coach is the check an
-    // appraisal stored before the domains' fix was waiting for.
-    await appraisal.update(
-      { ...input, needsCheck: false, ...(merged.applicabilityOverride === null ? { overrideReason: null } : {}) },
-      { transaction },
-    );
-    return refreshAndDescribe(review, appraisal, transaction);
-  });
+  return writeTransaction(
+    async (transaction) => {
+      const study = await checkReferences(review, studyId, mechanismId, transaction);
+      await assertNotAppraisedTwice(review.id, studyId, mechanismId, transaction, appraisal.id);
+      await checkDirectionReason(
+        review,
+        study,
+        {
+          direction: input.direction ?? appraisal.direction,
+          directionReason: input.directionReason !== undefined ? input.directionReason : appraisal.directionReason,
+          mechanismId,
+        },
+        transaction,
+      );
+      // Clearing the override clears its reason with it; a save by a coach is the check an
+      // appraisal stored before the domains' fix was waiting for.
+      await appraisal.update(
+        { ...input, needsCheck: false, ...(merged.applicabilityOverride === null ? { overrideReason: null } : {}) },
+        { transaction },
+      );
+      return refreshAndDescribe(review, appraisal, transaction);
+    },
+    { reviewId: review.id },
+  );
 }
 
 export async function deleteAppraisal(review: Review, appraisal: Appraisal): Promise<AppraisalDTO> {
   const study = await Study.findByPk(appraisal.studyId);
   const dto = study ? appraisalDTO(review, appraisal, study) : null;
-  await writeTransaction(async (transaction) => {
-    await appraisal.destroy({ transaction });
-    await refreshVerdict(review.id, { transaction, touch: true });
-  });
+  await writeTransaction(
+    async (transaction) => {
+      await appraisal.destroy({ transaction });
+      await refreshVerdict(review.id, { transaction, touch: true });
+    },
+    { reviewId: review.id },
+  );
   return dto!;
 }

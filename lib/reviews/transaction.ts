@@ -6,6 +6,8 @@ import { db } from '@/lib/db';
 const WRITE_LOCK_KEY = '30772361716758901';
 /** The first half of a review's own lock ("lbrv"); the review's id is the second (two-int4 key space). */
 const REVIEW_LOCK_SPACE = 1818391158;
+/** The first half of a named lock ("lbky"); hashtext(name) is the second. */
+const KEY_LOCK_SPACE = 1818393465;
 
 /** What a write transaction may touch, so PostgreSQL can let unrelated writers run side by side. */
 export interface WriteScope {
@@ -15,6 +17,11 @@ export interface WriteScope {
    * wait for it.
    */
   reviewId?: number;
+  /**
+   * Or: every row it reads to decide and writes is named by these keys (the sign-in throttle's
+   * rows): writers of other keys need not wait for it.
+   */
+  keys?: string[];
 }
 
 /**
@@ -30,23 +37,35 @@ export interface WriteScope {
  * shared plus an exclusive lock of its review, in one statement: writers of one review still go
  * one at a time, writers of different reviews (different coaches autosaving) no longer wait for
  * each other, and an unscoped writer (a library change, a team change) still excludes them all.
+ * A transaction scoped to keys (the sign-in throttle's rows of one address and one e-mail) does
+ * the same with a lock per key.
  * See https://www.postgresql.org/docs/current/explicit-locking.html#ADVISORY-LOCKS.
  */
-export function writeTransaction<T>(
-  run: (transaction: Transaction) => Promise<T>,
-  scope: WriteScope = {},
-): Promise<T> {
+export function writeTransaction<T>(run: (transaction: Transaction) => Promise<T>, scope: WriteScope = {}): Promise<T> {
   return db().transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
     if (db().getDialect() === 'postgres') {
-      const reviewId = scope.reviewId;
-      const sql =
-        reviewId === undefined
-          ? `SELECT pg_advisory_xact_lock(${WRITE_LOCK_KEY})`
-          : `SELECT pg_advisory_xact_lock_shared(${WRITE_LOCK_KEY}), pg_advisory_xact_lock(${REVIEW_LOCK_SPACE}, ${reviewLockKey(reviewId)})`;
-      await db().query(sql, { transaction });
+      const { query, values } = lockStatement(scope);
+      await db().query(query, { transaction, bind: values });
     }
     return run(transaction);
   });
+}
+
+/** The one statement that takes a write transaction's advisory locks (in a fixed order: no deadlock). */
+function lockStatement(scope: WriteScope): { query: string; values: unknown[] } {
+  const shared = `pg_advisory_xact_lock_shared(${WRITE_LOCK_KEY})`;
+  if (scope.reviewId !== undefined) {
+    return {
+      query: `SELECT ${shared}, pg_advisory_xact_lock(${REVIEW_LOCK_SPACE}, ${reviewLockKey(scope.reviewId)})`,
+      values: [],
+    };
+  }
+  if (scope.keys?.length) {
+    const keys = [...new Set(scope.keys)].sort();
+    const each = keys.map((_, i) => `pg_advisory_xact_lock(${KEY_LOCK_SPACE}, hashtext($${i + 1}))`).join(', ');
+    return { query: `SELECT ${shared}, ${each}`, values: keys };
+  }
+  return { query: `SELECT pg_advisory_xact_lock(${WRITE_LOCK_KEY})`, values: [] };
 }
 
 /** A review's id as the int4 second half of its lock key (ids beyond 2^31 wrap; a shared key only makes two reviews wait). */
