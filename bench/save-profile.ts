@@ -130,7 +130,9 @@ async function main() {
   }
   const per = (x: number) => (x / SAVES).toFixed(2);
   console.log(`${db().getDialect()}: ${SAVES} sequential saves (PATCH /api/reviews/:id, claimSource only)`);
-  console.log(`  queries per save: ${per(inside + outside)} (${per(inside)} inside the write transaction, ${per(outside)} outside)`);
+  console.log(
+    `  queries per save: ${per(inside + outside)} (${per(inside)} inside the write transaction, ${per(outside)} outside)`,
+  );
   console.log(`  write transactions per save: ${per(transactions)}; held ${per(heldMs)} ms per save`);
   console.log(`  CPU per save: ${per((used.user + used.system) / 1000)} ms; wall per save ${per(wall)} ms`);
   console.log('  statements:');

@@ -143,7 +143,13 @@ export async function onReviewSaved(review: Review): Promise<void> {
   const index = pending ? await pending : null;
   const old = index?.fuse.get(`review:${review.id}`) as ReviewDoc | undefined;
   if (index && (!old || old.title !== review.title)) return onReviewChanged(review.id);
-  if (index && old) index.fuse.upsert(reviewDoc(review, old.mechanisms.map((name) => ({ name }))));
+  if (index && old)
+    index.fuse.upsert(
+      reviewDoc(
+        review,
+        old.mechanisms.map((name) => ({ name })),
+      ),
+    );
   await publishChange({ kind: 'review', id: review.id });
 }
 
