@@ -12,7 +12,10 @@ async function main() {
   const url = process.env.TEST_POSTGRES_URL ?? cluster!.url;
   const args = process.argv.slice(2);
   console.log(`Integration tests on PostgreSQL (${url})`);
-  const result = spawnSync('npx', ['vitest', 'run', ...(args.length ? args : ['tests/integration'])], {
+  // Longer limits than on SQLite: every file creates its database and talks to it over TCP, and
+  // the seeded files write the whole demo that way (timeouts only, never a timed assertion).
+  const limits = ['--testTimeout=60000', '--hookTimeout=120000'];
+  const result = spawnSync('npx', ['vitest', 'run', ...limits, ...(args.length ? args : ['tests/integration'])], {
     stdio: 'inherit',
     env: { ...process.env, TEST_POSTGRES_URL: url },
   });

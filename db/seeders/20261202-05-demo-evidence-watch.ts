@@ -21,7 +21,7 @@ export async function up({ context: sequelize }: { context: Sequelize }) {
   const [[team]] = (await sequelize.query('SELECT id FROM teams WHERE slug = ?', {
     replacements: [DEMO_TEAM.slug],
   })) as [{ id: number }[], unknown];
-  const [[study]] = (await sequelize.query('SELECT id FROM studies WHERE teamId = ? AND doi = ?', {
+  const [[study]] = (await sequelize.query('SELECT id FROM studies WHERE "teamId" = ? AND doi = ?', {
     replacements: [team.id, RETRACTED.doi],
   })) as [{ id: number }[], unknown];
   if (!study) throw new Error(`Demo seed: no study ${RETRACTED.doi}`);

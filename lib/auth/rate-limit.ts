@@ -1,6 +1,6 @@
 import { Op } from 'sequelize';
 import { AppError } from '@/lib/api/errors';
-import { db } from '@/lib/db';
+import { writeTransaction } from '@/lib/reviews/transaction';
 import { SignInThrottle } from '@/models';
 
 /**
@@ -50,29 +50,34 @@ const live = (row: SignInThrottle | null, now: number) =>
  * counts as a failure until `succeeded` gives it back.
  */
 export async function takeTry(email: string, address: string, now = Date.now()): Promise<TryCounts> {
-  return db().transaction(async (transaction) => {
-    const [byEmail, byAddress] = await Promise.all(
-      [emailKey(email), addressKey(address)].map(async (key) =>
-        live(await SignInThrottle.findByPk(key, { transaction }), now),
-      ),
-    );
-    assertNotLimited(byEmail, byAddress, now);
-    const counts: TryCounts = {
-      email: (byEmail?.failures ?? 0) + 1,
-      address: (byAddress?.failures ?? 0) + 1,
-      firstAddressFailureAt: byAddress?.firstFailureAt.getTime() ?? now,
-    };
-    for (const [key, row] of [
-      [emailKey(email), byEmail],
-      [addressKey(address), byAddress],
-    ] as const) {
-      const at = new Date(now);
-      // A stale row (older than the window) starts over.
-      if (row) await row.update({ failures: row.failures + 1, lastFailureAt: at }, { transaction });
-      else await SignInThrottle.upsert({ key, failures: 1, firstFailureAt: at, lastFailureAt: at }, { transaction });
-    }
-    return counts;
-  });
+  // Read, check, then write: on PostgreSQL the two rows' locks make concurrent tries (from any
+  // process) count one after another (lib/reviews/transaction.ts).
+  return writeTransaction(
+    async (transaction) => {
+      const [byEmail, byAddress] = await Promise.all(
+        [emailKey(email), addressKey(address)].map(async (key) =>
+          live(await SignInThrottle.findByPk(key, { transaction }), now),
+        ),
+      );
+      assertNotLimited(byEmail, byAddress, now);
+      const counts: TryCounts = {
+        email: (byEmail?.failures ?? 0) + 1,
+        address: (byAddress?.failures ?? 0) + 1,
+        firstAddressFailureAt: byAddress?.firstFailureAt.getTime() ?? now,
+      };
+      for (const [key, row] of [
+        [emailKey(email), byEmail],
+        [addressKey(address), byAddress],
+      ] as const) {
+        const at = new Date(now);
+        // A stale row (older than the window) starts over.
+        if (row) await row.update({ failures: row.failures + 1, lastFailureAt: at }, { transaction });
+        else await SignInThrottle.upsert({ key, failures: 1, firstFailureAt: at, lastFailureAt: at }, { transaction });
+      }
+      return counts;
+    },
+    { keys: [emailKey(email), addressKey(address)] },
+  );
 }
 
 export interface TryCounts {
@@ -103,14 +108,17 @@ function assertNotLimited(byEmail: SignInThrottle | null, byAddress: SignInThrot
 
 /** The password was right: the account's count is cleared and the address gets its try back. */
 export async function succeeded(email: string, address: string): Promise<void> {
-  await db().transaction(async (transaction) => {
-    await SignInThrottle.destroy({ where: { key: emailKey(email) }, transaction });
-    await SignInThrottle.decrement('failures', {
-      by: 1,
-      where: { key: addressKey(address), failures: { [Op.gt]: 0 } },
-      transaction,
-    });
-  });
+  await writeTransaction(
+    async (transaction) => {
+      await SignInThrottle.destroy({ where: { key: emailKey(email) }, transaction });
+      await SignInThrottle.decrement('failures', {
+        by: 1,
+        where: { key: addressKey(address), failures: { [Op.gt]: 0 } },
+        transaction,
+      });
+    },
+    { keys: [emailKey(email), addressKey(address)] },
+  );
 }
 
 /** After a password reset: the account starts with a clean slate. */

@@ -15,7 +15,7 @@ import { Appraisal, Mechanism, Review, Study } from '@/models';
 import { deriveAppraisal } from './derive';
 import { directionReasonIssue, suggestedDirectionFor } from './direction-check';
 import { targetDesirable } from './meta';
-import { reviewDTO } from './queries';
+import { reviewDTO, reviewWithAuthor } from './queries';
 import { appraisalFacts, targetFacts, toAppraisalDTO, toMechanismDTO } from './rows';
 import type { AppraisalDTO, MechanismDTO, ReviewDTO } from './types';
 import { uniqueOrConflict, writeTransaction } from './transaction';
@@ -85,12 +85,18 @@ export async function createReview(authorId: number, input: CreateReviewInput): 
   return reviewDTO(review);
 }
 
-export type UpdateOutcome = { ok: true; review: ReviewDTO } | { ok: false; current: ReviewDTO };
+export type UpdateOutcome = { ok: true; review: ReviewDTO; row: Review } | { ok: false; current: ReviewDTO };
 
 /**
  * Optimistic locking: the update applies only where the stored version equals the one the
  * editor read (one UPDATE … WHERE version = ?, so two saves cannot both win), and bumps it.
  * A stale version changes nothing and returns the current review for the editor to offer.
+ *
+ * An autosave of text (title, claim, body, recommendations, tags) is that one conditional
+ * UPDATE and nothing else: a single statement is atomic on both engines, so it takes no
+ * transaction and no lock, and saves of different reviews never wait for each other. A change
+ * of protocol or population (the verdict is recomputed from it) or of status (an audit event)
+ * runs in a write transaction scoped to the review (lib/reviews/transaction.ts).
  */
 export async function updateReview(
   reviewId: number,
@@ -103,33 +109,42 @@ export async function updateReview(
     values.populationStatus = population.status;
     values.populationInjured = population.injured;
   }
-  const teamId = (await Review.findByPk(reviewId, { attributes: ['teamId'] }))?.teamId ?? null;
-  const changed = await writeTransaction(async (transaction) => {
-    const [count] = await Review.update(
+  const conditional = (transaction?: Transaction) =>
+    Review.update(
       { ...values, version: db().literal('version + 1') as unknown as number },
       { where: { id: reviewId, version }, transaction },
     );
-    if (count === 0) return false;
-    // Protocol and population change every appraisal's applicability, hence the verdict.
-    if (input.protocol || population) await refreshVerdict(reviewId, { transaction });
-    if (input.status)
-      await recordEvent(
-        {
-          teamId,
-          actorId,
-          action: 'review.status_changed',
-          subjectType: 'review',
-          subjectId: reviewId,
-          data: { status: input.status },
-        },
-        transaction,
-      );
-    return true;
-  });
-  const current = await Review.findByPk(reviewId);
+  const changed =
+    !input.protocol && !population && !input.status
+      ? (await conditional())[0] > 0
+      : await writeTransaction(
+          async (transaction) => {
+            const [count] = await conditional(transaction);
+            if (count === 0) return false;
+            // Protocol and population change every appraisal's applicability, hence the verdict.
+            if (input.protocol || population) await refreshVerdict(reviewId, { transaction });
+            if (input.status) {
+              const teamId = (await Review.findByPk(reviewId, { attributes: ['teamId'], transaction }))?.teamId ?? null;
+              await recordEvent(
+                {
+                  teamId,
+                  actorId,
+                  action: 'review.status_changed',
+                  subjectType: 'review',
+                  subjectId: reviewId,
+                  data: { status: input.status },
+                },
+                transaction,
+              );
+            }
+            return true;
+          },
+          { reviewId },
+        );
+  const current = await reviewWithAuthor(reviewId);
   // Deleted between the policy check and the update.
   if (!current) throw notFound('That review');
-  return changed ? { ok: true, review: await reviewDTO(current) } : { ok: false, current: await reviewDTO(current) };
+  return changed ? { ok: true, review: current.dto, row: current.row } : { ok: false, current: current.dto };
 }
 
 export async function deleteReview(reviewId: number, actorId: number): Promise<void> {
@@ -168,39 +183,48 @@ async function shiftFrom(reviewId: number, position: number, transaction: Transa
 }
 
 export async function createMechanism(reviewId: number, input: MechanismInput): Promise<MechanismDTO> {
-  return writeTransaction(async (transaction) => {
-    const last = (await Mechanism.max('position', { where: { reviewId }, transaction })) as number | null;
-    const end = last === null ? 0 : last + 1;
-    const position = input.position === undefined ? end : Math.min(input.position, end);
-    if (position < end) await shiftFrom(reviewId, position, transaction);
-    const mechanism = await Mechanism.create({ ...input, reviewId, position }, { transaction });
-    await refreshVerdict(reviewId, { transaction, touch: true });
-    return toMechanismDTO(mechanism);
-  });
+  return writeTransaction(
+    async (transaction) => {
+      const last = (await Mechanism.max('position', { where: { reviewId }, transaction })) as number | null;
+      const end = last === null ? 0 : last + 1;
+      const position = input.position === undefined ? end : Math.min(input.position, end);
+      if (position < end) await shiftFrom(reviewId, position, transaction);
+      const mechanism = await Mechanism.create({ ...input, reviewId, position }, { transaction });
+      await refreshVerdict(reviewId, { transaction, touch: true });
+      return toMechanismDTO(mechanism);
+    },
+    { reviewId },
+  );
 }
 
 export async function updateMechanism(mechanism: Mechanism, input: MechanismUpdateInput): Promise<MechanismDTO> {
-  return writeTransaction(async (transaction) => {
-    if (input.position !== undefined && input.position !== mechanism.position) {
-      await shiftFrom(mechanism.reviewId, input.position, transaction, mechanism.id);
-    }
-    await mechanism.update(input, { transaction });
-    await refreshVerdict(mechanism.reviewId, { transaction, touch: true });
-    return toMechanismDTO(mechanism);
-  });
+  return writeTransaction(
+    async (transaction) => {
+      if (input.position !== undefined && input.position !== mechanism.position) {
+        await shiftFrom(mechanism.reviewId, input.position, transaction, mechanism.id);
+      }
+      await mechanism.update(input, { transaction });
+      await refreshVerdict(mechanism.reviewId, { transaction, touch: true });
+      return toMechanismDTO(mechanism);
+    },
+    { reviewId: mechanism.reviewId },
+  );
 }
 
 /** Deletes the mechanism and its appraisals (the body's mechanism block is the editor's to remove). */
 export async function deleteMechanism(
   mechanism: Mechanism,
 ): Promise<{ mechanism: MechanismDTO; deletedAppraisals: number }> {
-  return writeTransaction(async (transaction) => {
-    const deletedAppraisals = await Appraisal.destroy({ where: { mechanismId: mechanism.id }, transaction });
-    const dto = toMechanismDTO(mechanism);
-    await mechanism.destroy({ transaction });
-    await refreshVerdict(mechanism.reviewId, { transaction, touch: true });
-    return { mechanism: dto, deletedAppraisals };
-  });
+  return writeTransaction(
+    async (transaction) => {
+      const deletedAppraisals = await Appraisal.destroy({ where: { mechanismId: mechanism.id }, transaction });
+      const dto = toMechanismDTO(mechanism);
+      await mechanism.destroy({ transaction });
+      await refreshVerdict(mechanism.reviewId, { transaction, touch: true });
+      return { mechanism: dto, deletedAppraisals };
+    },
+    { reviewId: mechanism.reviewId },
+  );
 }
 
 // ---------------------------------------------------------------------------------------------
@@ -272,7 +296,11 @@ async function checkDirectionReason(
 }
 
 /** The written appraisal as the verdict's refresh graded it, so a write grades it once. */
-async function refreshAndDescribe(review: Review, appraisal: Appraisal, transaction: Transaction): Promise<AppraisalDTO> {
+async function refreshAndDescribe(
+  review: Review,
+  appraisal: Appraisal,
+  transaction: Transaction,
+): Promise<AppraisalDTO> {
   const scored = await refreshVerdict(review.id, { transaction, touch: true });
   const derived = scored?.derived.get(appraisal.id);
   if (!derived) throw new Error(`Appraisal ${appraisal.id} was not graded with its review.`);
@@ -280,13 +308,16 @@ async function refreshAndDescribe(review: Review, appraisal: Appraisal, transact
 }
 
 export async function createAppraisal(review: Review, input: AppraisalInput): Promise<AppraisalDTO> {
-  return writeTransaction(async (transaction) => {
-    const study = await checkReferences(review, input.studyId, input.mechanismId, transaction);
-    await checkDirectionReason(review, study, input, transaction);
-    await assertNotAppraisedTwice(review.id, input.studyId, input.mechanismId, transaction);
-    const appraisal = await Appraisal.create({ ...input, reviewId: review.id }, { transaction });
-    return refreshAndDescribe(review, appraisal, transaction);
-  });
+  return writeTransaction(
+    async (transaction) => {
+      const study = await checkReferences(review, input.studyId, input.mechanismId, transaction);
+      await checkDirectionReason(review, study, input, transaction);
+      await assertNotAppraisedTwice(review.id, input.studyId, input.mechanismId, transaction);
+      const appraisal = await Appraisal.create({ ...input, reviewId: review.id }, { transaction });
+      return refreshAndDescribe(review, appraisal, transaction);
+    },
+    { reviewId: review.id },
+  );
 }
 
 export async function updateAppraisal(
@@ -303,35 +334,41 @@ export async function updateAppraisal(
   if (issue) throw badRequest(issue.message, [issue]);
   const studyId = input.studyId ?? appraisal.studyId;
   const mechanismId = input.mechanismId !== undefined ? input.mechanismId : appraisal.mechanismId;
-  return writeTransaction(async (transaction) => {
-    const study = await checkReferences(review, studyId, mechanismId, transaction);
-    await assertNotAppraisedTwice(review.id, studyId, mechanismId, transaction, appraisal.id);
-    await checkDirectionReason(
-      review,
-      study,
-      {
-        direction: input.direction ?? appraisal.direction,
-        directionReason: input.directionReason !== undefined ? input.directionReason : appraisal.directionReason,
-        mechanismId,
-      },
-      transaction,
-    );
-    // Clearing the override clears its reason with it; a save by a coach is the check an
-    // appraisal stored before the domains' fix was waiting for.
-    await appraisal.update(
-      { ...input, needsCheck: false, ...(merged.applicabilityOverride === null ? { overrideReason: null } : {}) },
-      { transaction },
-    );
-    return refreshAndDescribe(review, appraisal, transaction);
-  });
+  return writeTransaction(
+    async (transaction) => {
+      const study = await checkReferences(review, studyId, mechanismId, transaction);
+      await assertNotAppraisedTwice(review.id, studyId, mechanismId, transaction, appraisal.id);
+      await checkDirectionReason(
+        review,
+        study,
+        {
+          direction: input.direction ?? appraisal.direction,
+          directionReason: input.directionReason !== undefined ? input.directionReason : appraisal.directionReason,
+          mechanismId,
+        },
+        transaction,
+      );
+      // Clearing the override clears its reason with it; a save by a coach is the check an
+      // appraisal stored before the domains' fix was waiting for.
+      await appraisal.update(
+        { ...input, needsCheck: false, ...(merged.applicabilityOverride === null ? { overrideReason: null } : {}) },
+        { transaction },
+      );
+      return refreshAndDescribe(review, appraisal, transaction);
+    },
+    { reviewId: review.id },
+  );
 }
 
 export async function deleteAppraisal(review: Review, appraisal: Appraisal): Promise<AppraisalDTO> {
   const study = await Study.findByPk(appraisal.studyId);
   const dto = study ? appraisalDTO(review, appraisal, study) : null;
-  await writeTransaction(async (transaction) => {
-    await appraisal.destroy({ transaction });
-    await refreshVerdict(review.id, { transaction, touch: true });
-  });
+  await writeTransaction(
+    async (transaction) => {
+      await appraisal.destroy({ transaction });
+      await refreshVerdict(review.id, { transaction, touch: true });
+    },
+    { reviewId: review.id },
+  );
   return dto!;
 }

@@ -36,6 +36,16 @@ export async function reviewDTO(review: Review): Promise<ReviewDTO> {
   return toReviewDTO(review, names.get(review.authorId) ?? 'Former member');
 }
 
+/** The review row and its DTO, the author's name read in the same query. */
+export async function reviewWithAuthor(reviewId: number): Promise<{ row: Review; dto: ReviewDTO } | null> {
+  const row = await Review.findByPk(reviewId, {
+    include: [{ model: User, as: 'author', attributes: ['id', 'name'], required: false }],
+  });
+  if (!row) return null;
+  const author = (row as Review & { author?: User | null }).author;
+  return { row, dto: toReviewDTO(row, author?.name ?? 'Former member') };
+}
+
 export async function getReviewDTO(reviewId: number): Promise<ReviewDTO> {
   const review = await Review.findByPk(reviewId);
   if (!review) throw notFound('That review');

@@ -181,6 +181,12 @@ export class FuzzyIndex<T> {
     this.termsOf.set(ord, terms);
   }
 
+  /** The document with this key, if indexed. */
+  get(key: string): T | undefined {
+    const ord = this.ordinals.get(key);
+    return ord === undefined ? undefined : this.byOrdinal[ord];
+  }
+
   /** Adds the document, or replaces the one with the same key. */
   upsert(doc: T): void {
     this.remove(this.keyOf(doc));

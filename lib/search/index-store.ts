@@ -132,6 +132,27 @@ export async function onReviewChanged(reviewId: number): Promise<void> {
   await publishChange({ kind: 'review', id: reviewId });
 }
 
+/**
+ * After a save of the review's own fields (PATCH /api/reviews/:id, the autosave), with the row
+ * as saved. Its mechanisms did not change, so while its title is the same the mechanism
+ * documents stay and the review's document keeps their names: no query, and no scan of the
+ * team's index. Otherwise (a new title, a document not there) it is onReviewChanged.
+ */
+export async function onReviewSaved(review: Review): Promise<void> {
+  const pending = teams().get(review.teamId);
+  const index = pending ? await pending : null;
+  const old = index?.fuse.get(`review:${review.id}`) as ReviewDoc | undefined;
+  if (index && (!old || old.title !== review.title)) return onReviewChanged(review.id);
+  if (index && old)
+    index.fuse.upsert(
+      reviewDoc(
+        review,
+        old.mechanisms.map((name) => ({ name })),
+      ),
+    );
+  await publishChange({ kind: 'review', id: review.id });
+}
+
 /** Keeps the indexes current after a library study changed or was deleted. */
 export async function onStudyChanged(studyId: number): Promise<void> {
   await updateStudy(studyId);

@@ -1,7 +1,7 @@
 import { Op, type Transaction } from 'sequelize';
 import { badRequest, conflict, notFound } from '@/lib/api/errors';
 import { recordEvent } from '@/lib/audit/record';
-import { db } from '@/lib/db';
+import { writeTransaction } from '@/lib/reviews/transaction';
 import { Invitation, Membership, User } from '@/models';
 import type { Role } from '@/models/roles';
 
@@ -60,7 +60,7 @@ async function membershipOf(teamId: number, membershipId: number, transaction?: 
 
 /**
  * The last-owner rule, checked inside the write transaction that changes the membership: writes
- * are serialised (lib/sqlite-writer.ts), so two owners demoting each other at once see each
+ * are serialised (lib/sqlite-writer.ts; on PostgreSQL the write lock of lib/reviews/transaction.ts), so two owners demoting each other at once see each
  * other's change and the second one is refused.
  */
 async function assertAnotherOwnerRemains(teamId: number, membership: Membership, transaction: Transaction) {
@@ -75,7 +75,7 @@ export async function changeRole(
   membershipId: number,
   role: Role,
 ): Promise<MemberRow> {
-  await db().transaction(async (transaction) => {
+  await writeTransaction(async (transaction) => {
     const membership = await membershipOf(teamId, membershipId, transaction);
     if (membership.role !== role && role !== 'owner') await assertAnotherOwnerRemains(teamId, membership, transaction);
     const from = membership.role;
@@ -96,7 +96,7 @@ export async function changeRole(
 }
 
 export async function removeMember(actorId: number, teamId: number, membershipId: number): Promise<void> {
-  await db().transaction(async (transaction) => {
+  await writeTransaction(async (transaction) => {
     const membership = await membershipOf(teamId, membershipId, transaction);
     await assertAnotherOwnerRemains(teamId, membership, transaction);
     await membership.destroy({ transaction });

@@ -18,6 +18,8 @@ export interface Stack {
   url: string;
   /** The app processes' own addresses (behind nginx). */
   apps: string[];
+  /** Their process ids (for the benchmark's CPU figures). */
+  appPids: number[];
   databaseUrl: string;
   /** A folder nginx serves as it is under /static/ (for the benchmark's static file). */
   staticDir: string;
@@ -175,6 +177,7 @@ export async function startStack(options: { apps?: number } = {}): Promise<Stack
     return {
       url,
       apps: appPorts.map((p) => `http://127.0.0.1:${p}`),
+      appPids: children.filter((c) => c !== nginx).map((c) => c.pid!),
       databaseUrl,
       staticDir: path.join(work, 'static'),
       smtp,

@@ -69,31 +69,41 @@ describe('every model stores each attribute in its own column', () => {
       const booleans = attributes.filter(([, a]) => (a.type as { key?: string }).key === 'BOOLEAN').length;
       const passes = Math.max(1, Math.ceil(Math.log2(Math.max(2, booleans))));
       // Foreign keys point at rows this test does not create; the check is about columns only.
-      await db().query('PRAGMA foreign_keys = OFF');
-      for (let pass = 0; pass < passes; pass++) {
-        const values: Record<string, unknown> = {};
-        attributes.forEach(([name, attr], index) => {
-          values[name] = valueFor(name, attr, index, pass);
-        });
-        const created = await model.unscoped().create(values, { silent: true, validate: false });
-        // Most tables key on an integer id; a few on a natural key (sign_in_throttles.key).
-        const key = model.primaryKeyAttribute;
-        const id = created.get(key) as number | string;
-        const back = (await model.unscoped().findByPk(id))!.get({ plain: true }) as Record<string, unknown>;
-        const [[raw]] = (await db().query(`SELECT * FROM ${model.getTableName()} WHERE ${key} = :id`, {
-          replacements: { id },
-        })) as [
-          Record<string, unknown>[],
-          unknown,
-        ];
-        for (const [name, attr] of attributes) {
-          if (name === 'updatedAt' || name === 'createdAt') continue;
-          expect(comparable(back[name]), `${model.name}.${name} read through the model`).toEqual(
-            comparable(values[name]),
-          );
-          expect(raw, `${model.name} has a column for ${name}`).toHaveProperty(attr.field ?? name);
-          expect(attr.field ?? name, `${model.name}.${name} maps to its own column`).toBe(name);
+      // SQLite: off for the connection. PostgreSQL: off for one transaction (triggers, which
+      // enforce them, do not fire in replica mode), rolled back at the end.
+      const postgres = db().getDialect() === 'postgres';
+      const transaction = postgres ? await db().transaction() : undefined;
+      if (transaction) await db().query('SET LOCAL session_replication_role = replica', { transaction });
+      else await db().query('PRAGMA foreign_keys = OFF');
+      try {
+        for (let pass = 0; pass < passes; pass++) {
+          const values: Record<string, unknown> = {};
+          attributes.forEach(([name, attr], index) => {
+            values[name] = valueFor(name, attr, index, pass);
+          });
+          const created = await model.unscoped().create(values, { silent: true, validate: false, transaction });
+          // Most tables key on an integer id; a few on a natural key (sign_in_throttles.key).
+          const key = model.primaryKeyAttribute;
+          const id = created.get(key) as number | string;
+          const back = (await model.unscoped().findByPk(id, { transaction }))!.get({ plain: true }) as Record<
+            string,
+            unknown
+          >;
+          const [[raw]] = (await db().query(`SELECT * FROM ${model.getTableName()} WHERE "${key}" = :id`, {
+            replacements: { id },
+            transaction,
+          })) as [Record<string, unknown>[], unknown];
+          for (const [name, attr] of attributes) {
+            if (name === 'updatedAt' || name === 'createdAt') continue;
+            expect(comparable(back[name]), `${model.name}.${name} read through the model`).toEqual(
+              comparable(values[name]),
+            );
+            expect(raw, `${model.name} has a column for ${name}`).toHaveProperty(attr.field ?? name);
+            expect(attr.field ?? name, `${model.name}.${name} maps to its own column`).toBe(name);
+          }
         }
+      } finally {
+        await transaction?.rollback();
       }
     });
   }

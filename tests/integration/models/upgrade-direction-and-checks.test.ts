@@ -23,9 +23,26 @@ describe('migration 20261202-01-direction-and-checks', () => {
       logger: undefined,
     });
     await umzug.up({ to: '20261201-0004-publishing' });
-    await db().query('PRAGMA foreign_keys = OFF');
     const now = new Date();
     const stamp = { createdAt: now, updatedAt: now };
+    // The rows the appraisal and studies point at, as that schema had them.
+    await q.bulkInsert('users', [{ id: 1, name: 'A coach', email: 'coach@example.test', passwordHash: 'x', ...stamp }]);
+    await q.bulkInsert('teams', [{ id: 1, name: 'A team', slug: 'a-team', ...stamp }]);
+    await q.bulkInsert('reviews', [
+      {
+        id: 1,
+        teamId: 1,
+        authorId: 1,
+        title: 'A review',
+        slug: 'a-review',
+        claim: 'A claim',
+        protocol: JSON.stringify({}),
+        body: JSON.stringify({ type: 'doc', content: [] }),
+        recommendations: JSON.stringify({}),
+        tags: '[]',
+        ...stamp,
+      },
+    ]);
     await q.bulkInsert('studies', [
       {
         id: 1,
@@ -56,19 +73,25 @@ describe('migration 20261202-01-direction-and-checks', () => {
 
     await umzug.up();
 
-    const [appraisals] = (await db().query('SELECT needsCheck, directionReason FROM appraisals')) as [
-      { needsCheck: number; directionReason: string | null }[],
+    const [appraisals] = (await db().query('SELECT "needsCheck", "directionReason" FROM appraisals')) as [
+      { needsCheck: number | boolean; directionReason: string | null }[],
       unknown,
     ];
-    expect(appraisals).toEqual([{ needsCheck: 1, directionReason: null }]);
+    expect(appraisals.map((a) => ({ ...a, needsCheck: Boolean(a.needsCheck) }))).toEqual([
+      { needsCheck: true, directionReason: null },
+    ]);
     const [studies] = (await db().query('SELECT id, effect FROM studies ORDER BY id')) as [
-      { id: number; effect: string }[],
+      { id: number; effect: string | object }[],
       unknown,
     ];
-    expect(JSON.parse(studies[0].effect)).toEqual({ kind: 'ready', effectSize: 0.31, variance: 0.02, measure: 'smd' });
-    expect(JSON.parse(studies[1].effect)).toEqual({ kind: 't', t: 2, n1: 10, n2: 10 });
+    // SQLite hands JSON back as text, PostgreSQL parsed.
+    const effect = (value: string | object) => (typeof value === 'string' ? JSON.parse(value) : value);
+    expect(effect(studies[0].effect)).toEqual({ kind: 'ready', effectSize: 0.31, variance: 0.02, measure: 'smd' });
+    expect(effect(studies[1].effect)).toEqual({ kind: 't', t: 2, n1: 10, n2: 10 });
     const [[review]] = (await db().query(
-      "SELECT dflt_value FROM pragma_table_info('reviews') WHERE name = 'outcomeDesirable'",
+      db().getDialect() === 'postgres'
+        ? "SELECT column_default AS dflt_value FROM information_schema.columns WHERE table_name = 'reviews' AND column_name = 'outcomeDesirable'"
+        : "SELECT dflt_value FROM pragma_table_info('reviews') WHERE name = 'outcomeDesirable'",
     )) as [{ dflt_value: string }[], unknown];
     expect(review.dflt_value).toContain('higher');
   });

@@ -50,7 +50,8 @@ describe('demo reviews and the direction of their effects', () => {
 
   it('reads back through the models the certainty domains the seed wrote', async () => {
     const [rows] = (await db().query(
-      'SELECT id, riskOfBias, inconsistency, indirectness, imprecision, publicationBias FROM appraisals ORDER BY id',
+      // Quoted: PostgreSQL folds unquoted names to lower case.
+      'SELECT id, "riskOfBias", inconsistency, indirectness, imprecision, "publicationBias" FROM appraisals ORDER BY id',
     )) as [Record<string, unknown>[], unknown];
     const { Appraisal } = await import('@/models');
     const models = await Appraisal.findAll({

@@ -1,4 +1,4 @@
-import { onReviewChanged } from '@/lib/search/index-store';
+import { onReviewChanged, onReviewSaved } from '@/lib/search/index-store';
 import { assertReviewEditable, assertSeesScores } from '@/lib/rounds/freeze';
 import { route } from '@/lib/auth/handler';
 import { deleteReview, updateReview } from '@/lib/reviews/commands';
@@ -22,7 +22,7 @@ export const PATCH = route(
     await assertReviewEditable(params.id);
     const outcome = await updateReview(params.id, signedIn().userId, body);
     if (outcome.ok) {
-      await onReviewChanged(params.id);
+      await onReviewSaved(outcome.row);
       return { review: outcome.review };
     }
     const error = 'Someone else saved this review after you opened it. Reload it, or keep your text as a copy.';
