@@ -1,33 +1,15 @@
 /**
  * Benchmark (not a test): writes at the same moment against a production build, the way a busy
- * team uses it. Needs `npm run build` first; starts `npm start`'s server (scripts/start.ts) on a
- * free port with a fresh seeded database, then measures:
+ * team uses it. Starts the production build with `npm start`'s server on a fresh seeded database
+ * (bench/lib/production.ts, which builds first if there is no build), then measures:
  * - 20 and 100 saves of one review from the same (stale) version at once: how many 200, 409, 5xx,
  *   and the p50 / p99 of an unrelated GET /api/me sent every 10 ms during the burst;
  * - 50 appraisals created at once: how many 201 and 5xx, and whether every 201 is in the database.
  *
  *   npx tsx bench/concurrency.ts
  */
-import { spawn } from 'node:child_process';
-import { mkdtempSync } from 'node:fs';
-import { createServer } from 'node:net';
-import { tmpdir } from 'node:os';
-import path from 'node:path';
-
-const root = process.cwd();
-const work = mkdtempSync(path.join(tmpdir(), 'loadbearing-bench-concurrency-'));
-const databaseFile = path.join(work, 'bench.sqlite');
-process.env.DATABASE_URL = databaseFile;
-
-function freePort(): Promise<number> {
-  return new Promise((resolve) => {
-    const probe = createServer();
-    probe.listen(0, '127.0.0.1', () => {
-      const port = (probe.address() as { port: number }).port;
-      probe.close(() => resolve(port));
-    });
-  });
-}
+import { newReview as reviewInput } from '../tests/helpers/review-input';
+import { startProduction } from './lib/production';
 
 const percentile = (values: number[], p: number) => {
   const sorted = [...values].sort((a, b) => a - b);
@@ -35,39 +17,9 @@ const percentile = (values: number[], p: number) => {
 };
 
 async function main() {
-  const { db } = await import('../lib/db');
-  const { migrate, seed } = await import('../db/migrate');
-  await migrate(db());
-  await seed(db());
-  await db().close();
-
-  const port = await freePort();
-  const base = `http://127.0.0.1:${port}`;
-  const server = spawn(process.execPath, ['--import', 'tsx', path.join(root, 'scripts/start.ts')], {
-    cwd: root,
-    env: {
-      ...process.env,
-      NODE_ENV: 'production',
-      PORT: String(port),
-      HOST: '127.0.0.1',
-      SESSION_SECRET: 'bench-secret-that-is-long-enough-for-iron-session-0',
-      COOKIE_SECURE: 'false',
-      APP_URL: base,
-      STORAGE_DIR: path.join(work, 'uploads'),
-      MAIL_DROP_DIR: path.join(work, 'mail'),
-      SMTP_PORT: '1',
-    },
-    stdio: ['ignore', 'ignore', 'inherit'],
-  });
+  const app = await startProduction({ name: 'bench-concurrency' });
+  const base = app.url;
   try {
-    for (let i = 0; i < 240; i++) {
-      try {
-        if ((await fetch(`${base}/api/me`)).status === 401) break;
-      } catch {
-        // not listening yet
-      }
-      await new Promise((r) => setTimeout(r, 250));
-    }
     const signIn = await fetch(`${base}/api/auth/sign-in`, {
       method: 'POST',
       headers: { 'content-type': 'application/json' },
@@ -83,31 +35,7 @@ async function main() {
     const me = await (await call('GET', '/api/me')).json();
     const teamId = me.teams[0].id;
     const newReview = async (title: string) =>
-      (
-        await (
-          await call('POST', '/api/reviews', {
-            teamId,
-            title,
-            claim: 'Light daily hangs make fingers stronger in eight weeks.',
-            claimSource: 'A video',
-            protocol: {
-              exercise: 'Hangboard half-crimp hang',
-              loadValue: 10,
-              loadUnit: 'kg-added',
-              referenceBodyweightKg: 70,
-              referenceMaxAddedKg: 30,
-              secondsPerSet: 10,
-              setsPerSession: 6,
-              sessionsPerDay: 2,
-              daysPerWeek: 4,
-              minHoursBetween: 6,
-              weeks: 8,
-              effort: 'hard',
-            },
-            population: { status: 'recreational', injured: false },
-          })
-        ).json()
-      ).review;
+      (await (await call('POST', '/api/reviews', reviewInput(teamId, { title }))).json()).review;
 
     for (const n of [20, 100]) {
       const review = await newReview(`Bench stale saves ${n}`);
@@ -168,7 +96,7 @@ async function main() {
         `${ok.filter((c) => stored.has(c.id)).length} of the 201s are in the database`,
     );
   } finally {
-    server.kill('SIGTERM');
+    await app.stop();
   }
 }
 

@@ -7,16 +7,15 @@
  *
  *   npm run build && npx tsx bench/layout-shifts.ts [--json] [--screenshots=DIR]
  *
- * A throwaway seeded SQLite file and `npm start`'s server (scripts/start.ts), signed in as the demo
+ * The production build on a throwaway seeded SQLite file (bench/lib/production.ts), signed in as the demo
  * coach, like bench/lighthouse.ts. Shifts are read with the Layout Instability API
  * (https://wicg.github.io/layout-instability/) until the page has been quiet for 3 s.
  */
-import { spawn } from 'node:child_process';
-import { mkdirSync, mkdtempSync, rmSync } from 'node:fs';
-import { createServer } from 'node:net';
-import { loadavg, tmpdir } from 'node:os';
+import { mkdirSync } from 'node:fs';
+import { loadavg } from 'node:os';
 import path from 'node:path';
 import { chromium } from 'playwright-core';
+import { startProduction } from './lib/production';
 
 const COACH = { email: 'coach@granite-hollow.test', password: 'loadbearing-demo' };
 const VIEWPORTS = [
@@ -31,64 +30,16 @@ interface Shift {
   sources: { node: string; before: string; after: string }[];
 }
 
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const probe = createServer();
-    probe.once('error', reject);
-    probe.listen(0, '127.0.0.1', () => {
-      const a = probe.address();
-      const port = typeof a === 'object' && a ? a.port : 0;
-      probe.close(() => resolve(port));
-    });
-  });
-}
-
 async function main() {
-  const root = process.cwd();
   const screenshots = process.argv.find((a) => a.startsWith('--screenshots='))?.slice('--screenshots='.length);
-  const work = mkdtempSync(path.join(tmpdir(), 'loadbearing-bench-cls-'));
-  const databaseFile = path.join(work, 'bench.sqlite');
-  process.env.DATABASE_URL = databaseFile;
-  process.env.ALLOW_DEMO_SEED = '1';
-  const { db } = await import('../lib/db');
-  const { migrate, seed } = await import('../db/migrate');
-  await migrate(db());
-  await seed(db());
-  const [rows] = await db().query('SELECT id FROM reviews ORDER BY id LIMIT 1');
-  const reviewId = (rows as { id: number }[])[0]?.id ?? 1;
-  await db().close();
-
-  const port = await freePort();
-  const base = `http://127.0.0.1:${port}`;
-  const server = spawn(process.execPath, ['--import', 'tsx', path.join(root, 'scripts/start.ts')], {
-    cwd: root,
-    env: {
-      ...process.env,
-      NODE_ENV: 'production',
-      NEXT_TELEMETRY_DISABLED: '1',
-      PORT: String(port),
-      HOST: '127.0.0.1',
-      DATABASE_URL: databaseFile,
-      SESSION_SECRET: 'bench-secret-that-is-long-enough-for-iron-session-00',
-      COOKIE_SECURE: 'false',
-      APP_URL: base,
-      SMTP_PORT: '1',
-    },
-    stdio: ['ignore', 'ignore', 'inherit'],
-  });
+  const app = await startProduction({ name: 'bench-cls' });
+  const base = app.url;
+  const reviewId = app.firstReviewId;
   const browser = await chromium.launch({
     executablePath: '/usr/bin/chromium',
     args: ['--headless', '--no-sandbox', '--disable-gpu', '--no-first-run', '--disable-background-networking'],
   });
   try {
-    for (let i = 0; i < 480; i++) {
-      try {
-        if ((await fetch(`${base}/`)).status < 500) break;
-      } catch {
-        // not up yet
-      }
-      await new Promise((r) => setTimeout(r, 250));
-    }
     const report: Record<string, { cls: number; shifts: Shift[]; loadAverage: number }> = {};
     for (const viewport of VIEWPORTS) {
       const context = await browser.newContext({ baseURL: base, viewport });
@@ -164,8 +115,7 @@ async function main() {
     }
   } finally {
     await browser.close();
-    server.kill('SIGTERM');
-    rmSync(work, { recursive: true, force: true });
+    await app.stop();
   }
 }
 

@@ -9,39 +9,27 @@
  *
  *   npm run build && npx tsx bench/lighthouse.ts [--json] [--page=workbench|verdict] [--save=DIR] [--once]
  *
- * Uses a throwaway seeded SQLite file and `npm start`'s server (scripts/start.ts). Each page is
+ * Uses the production build on a throwaway seeded SQLite file (bench/lib/production.ts). Each page is
  * run three times and the median performance score kept (Lighthouse's own advice: single runs
  * vary). Every failed audit of a category below 100 is listed, so a regression says what broke.
  * On a shared machine Total Blocking Time follows the load, so the report also gives the load
  * average, what moved (layout shifts and their elements) and where the main thread's time went —
  * figures that vary less from run to run. `--save=DIR` keeps every run's full report.
  */
-import { execFileSync, spawn } from 'node:child_process';
+import { execFileSync } from 'node:child_process';
 import { createRequire } from 'node:module';
-import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
-import { createServer } from 'node:net';
-import { loadavg, tmpdir } from 'node:os';
+import { mkdirSync, writeFileSync } from 'node:fs';
+import { loadavg } from 'node:os';
 import path from 'node:path';
 import * as chromeLauncher from 'chrome-launcher';
 import type { Result } from 'lighthouse';
+import { startProduction } from './lib/production';
 
 const DEFAULT_RUNS = 3;
 const LIGHTHOUSE_CLI = createRequire(import.meta.url).resolve('lighthouse/cli/index.js');
 const CHROMIUM = '/usr/bin/chromium';
 const COACH = { email: 'coach@granite-hollow.test', password: 'loadbearing-demo' };
 const VERDICT_SLUG = 'cold-plunges-after-strength';
-
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const probe = createServer();
-    probe.once('error', reject);
-    probe.listen(0, '127.0.0.1', () => {
-      const a = probe.address();
-      const port = typeof a === 'object' && a ? a.port : 0;
-      probe.close(() => resolve(port));
-    });
-  });
-}
 
 const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
 
@@ -168,50 +156,14 @@ async function audit(
 }
 
 async function main() {
-  const root = process.cwd();
-  const work = mkdtempSync(path.join(tmpdir(), 'loadbearing-bench-lh-'));
-  const databaseFile = path.join(work, 'bench.sqlite');
-  process.env.DATABASE_URL = databaseFile;
-  process.env.ALLOW_DEMO_SEED = '1';
-  const { db } = await import('../lib/db');
-  const { migrate, seed } = await import('../db/migrate');
-  await migrate(db());
-  await seed(db());
-  const [rows] = await db().query('SELECT id FROM reviews ORDER BY id LIMIT 1');
-  const reviewId = (rows as { id: number }[])[0]?.id ?? 1;
-  await db().close();
-
-  const port = await freePort();
-  const base = `http://127.0.0.1:${port}`;
-  const server = spawn(process.execPath, ['--import', 'tsx', path.join(root, 'scripts/start.ts')], {
-    cwd: root,
-    env: {
-      ...process.env,
-      NODE_ENV: 'production',
-      NEXT_TELEMETRY_DISABLED: '1',
-      PORT: String(port),
-      HOST: '127.0.0.1',
-      DATABASE_URL: databaseFile,
-      SESSION_SECRET: 'bench-secret-that-is-long-enough-for-iron-session-00',
-      COOKIE_SECURE: 'false',
-      APP_URL: base,
-      SMTP_PORT: '1',
-    },
-    stdio: ['ignore', 'ignore', 'inherit'],
-  });
+  const app = await startProduction({ name: 'bench-lh' });
+  const base = app.url;
+  const reviewId = app.firstReviewId;
   const chrome = await chromeLauncher.launch({
     chromePath: CHROMIUM,
     chromeFlags: ['--headless', '--no-sandbox', '--disable-gpu', '--no-first-run', '--disable-background-networking'],
   });
   try {
-    for (let i = 0; i < 480; i++) {
-      try {
-        if ((await fetch(`${base}/`)).status < 500) break;
-      } catch {
-        // not up yet
-      }
-      await new Promise((r) => setTimeout(r, 250));
-    }
     const signIn = await fetch(`${base}/api/auth/sign-in`, {
       method: 'POST',
       headers: { 'content-type': 'application/json', origin: base },
@@ -261,8 +213,7 @@ async function main() {
     }
   } finally {
     await chrome.kill();
-    server.kill('SIGTERM');
-    rmSync(work, { recursive: true, force: true });
+    await app.stop();
   }
 }
 

@@ -4,6 +4,10 @@
  * as the workbench's autosave does), and the sessions of the first coach (one person in several
  * tabs) also saving one shared review, so honest 409s (a stale version) happen as they would. Counts saves, 409s, other errors and the
  * latency of each save.
+ *
+ * Two paces: `pauseMs` 0 (the default) saves back to back, a stress far above what the workbench
+ * sends; `pauseMs` = AUTOSAVE_DELAY_MS waits the workbench's own autosave delay after each answer,
+ * the fastest a coach who keeps typing can make it save (components/editor/use-autosave.ts).
  */
 import { newReview } from '../tests/helpers/review-input';
 
@@ -35,7 +39,7 @@ export async function signIn(base: string, email: string): Promise<string> {
   return res.headers.getSetCookie()[0].split(';')[0];
 }
 
-export async function coachSaves(base: string, seconds: number): Promise<SaveFigures> {
+export async function coachSaves(base: string, seconds: number, pauseMs = 0): Promise<SaveFigures> {
   const emails = ['coach@granite-hollow.test', 'coach2@granite-hollow.test', 'owner@granite-hollow.test'];
   const cookies: string[] = [];
   for (let i = 0; i < COACHES; i++) cookies.push(await signIn(base, emails[i % emails.length]));
@@ -89,6 +93,7 @@ export async function coachSaves(base: string, seconds: number): Promise<SaveFig
           const kind = `${res.status} ${body?.error ?? ''}`.trim();
           errorKinds[kind] = (errorKinds[kind] ?? 0) + 1;
         }
+        if (pauseMs > 0) await new Promise((r) => setTimeout(r, pauseMs));
       }
     }),
   );

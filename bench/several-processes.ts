@@ -8,7 +8,8 @@
  *   2. withdraw (or publish) on one process → every reader through the proxy sees it: the
  *      largest delay over several rounds (goal ≤ 2 s);
  *   3. 16 coaches autosaving their reviews (PATCH with the version read) for SAVE_SECONDS on
- *      PostgreSQL through the proxy: errors other than 409, p99 of a save (goal < 150 ms).
+ *      PostgreSQL through the proxy and on SQLite: errors other than 409, p99 of a save (goal
+ *      < 150 ms), once back to back (a stress test) and once at the workbench's autosave pace.
  *
  *   npm run build && npx tsx bench/several-processes.ts [seconds per page run] [save seconds] [saves]
  */
@@ -20,6 +21,7 @@ import path from 'node:path';
 import pg from 'pg';
 import { freePort } from '../tests/helpers/pg-cluster';
 import { startStack, type Stack } from '../tests/helpers/stack';
+import { AUTOSAVE_DELAY_MS } from '../components/editor/use-autosave';
 import { coachSaves, signIn, type SaveFigures } from './save-load';
 
 interface CannonResult {
@@ -119,9 +121,9 @@ function cpuMsOf(pids: number[]): number {
 }
 
 /** The autosave load, with the CPU the app processes spent on it (sign-ins and setup included). */
-async function measuredSaves(base: string, pids: number[]) {
+async function measuredSaves(base: string, pids: number[], pauseMs = 0) {
   const before = cpuMsOf(pids);
-  const figures = await coachSaves(base, SAVE_SECONDS);
+  const figures = await coachSaves(base, SAVE_SECONDS, pauseMs);
   return { figures, cpuMs: cpuMsOf(pids) - before };
 }
 
@@ -151,14 +153,22 @@ async function sqliteSaves() {
         break;
       await new Promise((r) => setTimeout(r, 250));
     }
-    const { figures, cpuMs } = await measuredSaves(env.APP_URL, [app.pid!]);
-    printSaves('SQLite, one process', figures, cpuMs);
+    for (const [pace, pauseMs] of PACES) {
+      const { figures, cpuMs } = await measuredSaves(env.APP_URL, [app.pid!], pauseMs);
+      printSaves(`SQLite, one process, ${pace}`, figures, cpuMs);
+    }
   } finally {
     app.kill('SIGTERM');
     await new Promise((r) => app.once('exit', r));
     rmSync(work, { recursive: true, force: true });
   }
 }
+
+/** Back to back (a stress far above the workbench's rate), then at the workbench's autosave pace. */
+const PACES: [string, number][] = [
+  ['back to back', 0],
+  [`a save at most every ${AUTOSAVE_DELAY_MS / 1000} s per coach (the autosave delay)`, AUTOSAVE_DELAY_MS],
+];
 
 /** `… saves` as the third argument runs only part 3 (the autosave load). */
 const SAVES_ONLY = process.argv[4] === 'saves';
@@ -170,8 +180,10 @@ async function main() {
       await pageVersusStatic(stack);
       await staleness(stack);
     }
-    const { figures, cpuMs } = await measuredSaves(stack.url, stack.appPids);
-    printSaves('PostgreSQL, two processes behind nginx', figures, cpuMs);
+    for (const [pace, pauseMs] of PACES) {
+      const { figures, cpuMs } = await measuredSaves(stack.url, stack.appPids, pauseMs);
+      printSaves(`PostgreSQL, two processes behind nginx, ${pace}`, figures, cpuMs);
+    }
   } finally {
     await stack.stop();
   }

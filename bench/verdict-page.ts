@@ -7,17 +7,15 @@
  *
  *   npm run build && npx tsx bench/verdict-page.ts [seconds per run]
  *
- * Uses the production build in .next, a throwaway seeded SQLite file, and autocannon (npm
+ * Uses the production build in .next on a throwaway seeded SQLite file (bench/lib/production.ts), and autocannon (npm
  * `autocannon`) at 64 connections. The static file is written to public/ for the run (Next
  * lists public files when it starts) and removed afterwards.
  */
-import { spawn } from 'node:child_process';
-import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { rmSync, writeFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
-import { createServer } from 'node:net';
-import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { gzipSync } from 'node:zlib';
+import { startProduction } from './lib/production';
 
 interface CannonResult {
   requests: { average: number; total: number };
@@ -33,61 +31,15 @@ const SECONDS = Number(process.argv[2] ?? 10);
 const CONNECTIONS = 64;
 const SLUG = 'cold-plunges-after-strength';
 
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const probe = createServer();
-    probe.once('error', reject);
-    probe.listen(0, '127.0.0.1', () => {
-      const a = probe.address();
-      const port = typeof a === 'object' && a ? a.port : 0;
-      probe.close(() => resolve(port));
-    });
-  });
-}
-
 async function main() {
-  const root = process.cwd();
-  const work = mkdtempSync(path.join(tmpdir(), 'loadbearing-bench-page-'));
-  const databaseFile = path.join(work, 'bench.sqlite');
-  process.env.DATABASE_URL = databaseFile;
-  process.env.ALLOW_DEMO_SEED = '1';
-  const { db } = await import('../lib/db');
-  const { migrate, seed } = await import('../db/migrate');
-  await migrate(db());
-  await seed(db());
-  await db().close();
-
-  const port = await freePort();
-  const base = `http://127.0.0.1:${port}`;
   const staticName = `bench-static-${process.pid}.html`;
-  const staticPath = path.join(root, 'public', staticName);
+  const staticPath = path.join(process.cwd(), 'public', staticName);
   // Placeholder until the page's size is known; rewritten below before the static run.
   writeFileSync(staticPath, 'x');
   // `npm start`'s server: `next start`, no cache of our own (the proxy's is measured in bench/several-processes.ts).
-  const server = spawn(process.execPath, ['--import', 'tsx', path.join(root, 'scripts/start.ts')], {
-    cwd: root,
-    env: {
-      ...process.env,
-      NODE_ENV: 'production',
-      NEXT_TELEMETRY_DISABLED: '1',
-      PORT: String(port),
-      HOST: '127.0.0.1',
-      DATABASE_URL: databaseFile,
-      SESSION_SECRET: 'bench-secret-that-is-long-enough-for-iron-session-00',
-      APP_URL: base,
-      SMTP_PORT: '1',
-    },
-    stdio: ['ignore', 'ignore', 'inherit'],
-  });
+  const app = await startProduction({ name: 'bench-page' });
+  const base = app.url;
   try {
-    for (let i = 0; i < 120; i++) {
-      try {
-        if ((await fetch(`${base}/`)).status < 500) break;
-      } catch {
-        // not up yet
-      }
-      await new Promise((r) => setTimeout(r, 250));
-    }
     const pageRes = await fetch(`${base}/v/${SLUG}`);
     if (pageRes.status !== 200) throw new Error(`/v/${SLUG} answered ${pageRes.status}`);
     const html = await pageRes.text();
@@ -132,10 +84,8 @@ async function main() {
       `  ratio ${ratio.toFixed(2)} of the static file's throughput (goal ≥ 0.8: ${ratio >= 0.8 ? 'met' : 'NOT met'}).`,
     );
   } finally {
-    // Stopped by its own PID.
-    server.kill('SIGTERM');
+    await app.stop();
     rmSync(staticPath, { force: true });
-    rmSync(work, { recursive: true, force: true });
   }
 }
 

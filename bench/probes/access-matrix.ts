@@ -11,7 +11,7 @@ import { changedTables, ReadOnlyDb } from './lib/database';
 import { expectation, leakIn, refused, stricterThanPolicy } from './lib/leaks';
 import { publish, table } from './lib/report';
 import { endpoints, fill, isTeamScoped, queryFor } from './lib/routes';
-import { startProduction } from './lib/server';
+import { startProduction } from '../lib/production';
 import { buildWorld, type ProbeActor } from './lib/world';
 
 // Routes whose capability is not a team role: an account's own session and sign-up, a link's token,

@@ -9,7 +9,7 @@ import { ReadOnlyDb } from './lib/database';
 import type { Answer } from './lib/http';
 import { publish, table } from './lib/report';
 import { endpoints, fill, queryFor } from './lib/routes';
-import { startProduction } from './lib/server';
+import { startProduction } from '../lib/production';
 import { buildWorld } from './lib/world';
 
 interface Engine {

@@ -11,7 +11,7 @@ import { changedTables, ReadOnlyDb } from './lib/database';
 import { BROKEN_JSON, ODD_PATH_IDS, oneFieldWrong, randomlyWrong, WRONG_TYPES, type Malformed } from './lib/malformed';
 import { publish, table } from './lib/report';
 import { endpoints, fill, type Endpoint } from './lib/routes';
-import { startProduction } from './lib/server';
+import { startProduction } from '../lib/production';
 import { buildWorld } from './lib/world';
 
 /** The malformed requests of one route: its body kind decides which apply. */

@@ -1,9 +1,8 @@
-import { Skeleton } from '@/components/ui/Skeleton';
+import { LoadingRegion, Skeleton } from '@/components/ui/Skeleton';
 
 export default function Loading() {
   return (
-    <div role="status" aria-live="polite" className="space-y-6">
-      <span className="sr-only">Loading…</span>
+    <LoadingRegion label="Loading…" className="space-y-6">
       <div className="space-y-3">
         <Skeleton className="h-4 w-28" />
         <Skeleton className="h-10 w-64 max-w-full" />
@@ -13,6 +12,6 @@ export default function Loading() {
         <Skeleton className="h-36" />
         <Skeleton className="h-36" />
       </div>
-    </div>
+    </LoadingRegion>
   );
 }

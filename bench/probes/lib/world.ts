@@ -4,7 +4,7 @@ import type { Role } from '../../../models/roles';
 import { newReview } from '../../../tests/helpers/review-input';
 import type { ReadOnlyDb } from './database';
 import { Caller } from './http';
-import type { Production } from './server';
+import type { Production } from '../../lib/production';
 
 /**
  * Two teams on the running server: the demo team of the seed and a second team built through the

@@ -1,4 +1,4 @@
-import { Skeleton } from '@/components/ui/Skeleton';
+import { LoadingRegion, Skeleton } from '@/components/ui/Skeleton';
 
 /**
  * Shown while the server reads the review on a navigation. Laid out like the workbench (header,
@@ -10,8 +10,7 @@ import { Skeleton } from '@/components/ui/Skeleton';
  */
 export function WorkbenchSkeleton() {
   return (
-    <div role="status" aria-live="polite" className="min-h-dvh">
-      <span className="sr-only">Loading the review…</span>
+    <LoadingRegion label="Loading the review…" className="min-h-dvh">
       <div className="space-y-4 pb-6">
         <Skeleton className="h-6 w-40" />
         <Skeleton className="h-9 w-3/4" />
@@ -22,6 +21,6 @@ export function WorkbenchSkeleton() {
         <Skeleton className="h-[40rem]" />
         <Skeleton className="hidden h-[32rem] lg:block" />
       </div>
-    </div>
+    </LoadingRegion>
   );
 }

@@ -1,13 +1,5 @@
-import { Skeleton } from '@/components/ui/Skeleton';
+import { PageSkeleton } from '@/components/ui/Skeleton';
 
 export default function Loading() {
-  return (
-    <div role="status" aria-live="polite" className="space-y-6">
-      <span className="sr-only">Loading the study…</span>
-      <Skeleton className="h-5 w-32" />
-      <Skeleton className="h-10 w-3/4" />
-      <Skeleton className="h-32 w-full" />
-      <Skeleton className="h-48 w-full" />
-    </div>
-  );
+  return <PageSkeleton label="Loading the study…" bars={['h-5 w-32', 'h-10 w-3/4', 'h-32 w-full', 'h-48 w-full']} />;
 }

@@ -1,17 +1,9 @@
-import { LinkButton } from '@/components/ui/Button';
-import { EmptyState } from '@/components/ui/EmptyState';
+import { ReviewNotFound } from '@/components/review/ReviewNotFound';
 
-export default function ReviewNotFound() {
+export default function NotFound() {
   return (
-    <EmptyState
-      title="This review was not found"
-      action={
-        <LinkButton href="/reviews" variant="primary">
-          See the team’s reviews
-        </LinkButton>
-      }
-    >
+    <ReviewNotFound title="This review was not found">
       It may have been deleted, the link may be mistyped, or it belongs to a team you are not part of.
-    </EmptyState>
+    </ReviewNotFound>
   );
 }

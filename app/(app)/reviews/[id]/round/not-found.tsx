@@ -1,18 +1,10 @@
-import { LinkButton } from '@/components/ui/Button';
-import { EmptyState } from '@/components/ui/EmptyState';
+import { ReviewNotFound } from '@/components/review/ReviewNotFound';
 
 export default function ScorecardNotFound() {
   return (
-    <EmptyState
-      title="This scorecard was not found"
-      action={
-        <LinkButton href="/reviews" variant="primary">
-          See the team’s reviews
-        </LinkButton>
-      }
-    >
+    <ReviewNotFound title="This scorecard was not found">
       Scorecards open only to the reviewers invited to a round. The link may be mistyped, or the round belongs to a team
       you are not part of.
-    </EmptyState>
+    </ReviewNotFound>
   );
 }

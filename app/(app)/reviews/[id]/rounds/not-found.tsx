@@ -1,18 +1,10 @@
-import { LinkButton } from '@/components/ui/Button';
-import { EmptyState } from '@/components/ui/EmptyState';
+import { ReviewNotFound } from '@/components/review/ReviewNotFound';
 
 export default function RoundsNotFound() {
   return (
-    <EmptyState
-      title="This review was not found"
-      action={
-        <LinkButton href="/reviews" variant="primary">
-          See the team’s reviews
-        </LinkButton>
-      }
-    >
+    <ReviewNotFound title="This review was not found">
       Peer review is run by the review’s author and the team owner. The link may be mistyped, or the review belongs to a
       team you are not part of.
-    </EmptyState>
+    </ReviewNotFound>
   );
 }

@@ -2,20 +2,23 @@ import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
 import { createWriteStream, existsSync, mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
-import { startFakeDoiServer } from '../../../lib/citations/fake-doi-server';
-import { startFakeCrossrefServer } from '../../../lib/citations/fake-crossref-server';
-import { startFakeSmtp, type FakeSmtp } from '../../../lib/mail/fake-smtp';
-import { freePort } from '../../../tests/helpers/pg-cluster';
+import { startFakeDoiServer } from '../../lib/citations/fake-doi-server';
+import { startFakeCrossrefServer } from '../../lib/citations/fake-crossref-server';
+import { startFakeSmtp, type FakeSmtp } from '../../lib/mail/fake-smtp';
+import { freePort } from '../../tests/helpers/pg-cluster';
 
 /**
  * The production build served by `npm start`'s server (scripts/start.ts) on a free port, over a
  * throwaway SQLite file with the demo seed, with the mail, DOI and Crossref fakes — the setup of
- * tests/e2e/global-setup.ts, outside vitest. Builds first when .next has no build
- * (PROBE_REBUILD=1 forces one).
+ * tests/e2e/global-setup.ts, outside vitest, for the probes and the single-process benchmarks.
+ * Builds first when .next has no build (PROBE_REBUILD=1 forces one); PROBE_KEEP=1 keeps the
+ * work folder (database, mail, server log).
  */
 export interface Production {
   url: string;
   databaseFile: string;
+  /** The first demo review, the one the workbench benchmarks open. */
+  firstReviewId: number;
   smtp: FakeSmtp;
   /** The server's stderr, where it logs what became a 500. */
   logFile: string;
@@ -24,7 +27,14 @@ export interface Production {
 
 const ROOT = process.cwd();
 
-export async function startProduction(): Promise<Production> {
+export interface ProductionOptions {
+  /** Names the work folder under the system's temporary folder. */
+  name?: string;
+  /** Set on the server on top of (or instead of) the ones below. */
+  env?: Record<string, string>;
+}
+
+export async function startProduction(options: ProductionOptions = {}): Promise<Production> {
   if (process.env.PROBE_REBUILD === '1' || !existsSync(path.join(ROOT, '.next', 'BUILD_ID'))) {
     console.log('Building the app (next build)…');
     const build = spawnSync(process.execPath, [path.join(ROOT, 'node_modules/next/dist/bin/next'), 'build'], {
@@ -34,13 +44,16 @@ export async function startProduction(): Promise<Production> {
     });
     if (build.status !== 0) throw new Error('next build failed');
   }
-  const work = mkdtempSync(path.join(tmpdir(), 'loadbearing-probe-'));
+  const work = mkdtempSync(path.join(tmpdir(), `loadbearing-${options.name ?? 'probe'}-`));
   const databaseFile = path.join(work, 'probe.sqlite');
   process.env.DATABASE_URL = databaseFile;
-  const { db } = await import('../../../lib/db');
-  const { migrate, seed } = await import('../../../db/migrate');
+  process.env.ALLOW_DEMO_SEED = '1';
+  const { db } = await import('../../lib/db');
+  const { migrate, seed } = await import('../../db/migrate');
   await migrate(db());
   await seed(db());
+  const [rows] = await db().query('SELECT id FROM reviews ORDER BY id LIMIT 1');
+  const firstReviewId = (rows as { id: number }[])[0]?.id ?? 1;
   await db().close();
 
   const smtp = await startFakeSmtp({ dropDir: path.join(work, 'mail') });
@@ -70,6 +83,7 @@ export async function startProduction(): Promise<Production> {
       CROSSREF_BASE_URL: crossref.url,
       // Each actor sends its own x-forwarded-for, so the sign-in throttle counts them apart.
       TRUSTED_PROXIES: '127.0.0.1,::1',
+      ...options.env,
     },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
@@ -102,5 +116,5 @@ export async function startProduction(): Promise<Production> {
     }
     await new Promise((r) => setTimeout(r, 250));
   }
-  return { url, databaseFile, smtp, logFile, stop };
+  return { url, databaseFile, firstReviewId, smtp, logFile, stop };
 }
