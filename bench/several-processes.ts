@@ -13,26 +13,14 @@
  *
  *   npm run build && npx tsx bench/several-processes.ts [seconds per page run] [save seconds] [saves]
  */
-import { spawn, spawnSync } from 'node:child_process';
-import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { createRequire } from 'node:module';
+import { readFileSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import pg from 'pg';
-import { freePort } from '../tests/helpers/pg-cluster';
 import { startStack, type Stack } from '../tests/helpers/stack';
 import { AUTOSAVE_DELAY_MS } from '../components/editor/use-autosave';
 import { coachSaves, signIn, type SaveFigures } from './save-load';
-
-interface CannonResult {
-  requests: { average: number };
-  latency: { p99: number; p50: number };
-  non2xx: number;
-  errors: number;
-}
-const autocannon = createRequire(import.meta.url)('autocannon') as (
-  opts: Record<string, unknown>,
-) => Promise<CannonResult>;
+import { autocannon, type CannonResult } from './lib/autocannon';
+import { startProduction } from './lib/production';
 
 const SECONDS = Number(process.argv[2] ?? 10);
 const SAVE_SECONDS = Number(process.argv[3] ?? 30);
@@ -129,38 +117,14 @@ async function measuredSaves(base: string, pids: number[], pauseMs = 0) {
 
 /** The same autosave load on the embedded default: one `npm start` on a SQLite file. */
 async function sqliteSaves() {
-  const work = mkdtempSync(path.join(tmpdir(), 'loadbearing-bench-sqlite-'));
-  const port = await freePort();
-  const env = {
-    ...process.env,
-    DATABASE_URL: path.join(work, 'bench.sqlite'),
-    SESSION_SECRET: 'bench-secret-that-is-long-enough-for-iron-session-00',
-    COOKIE_SECURE: 'false',
-    APP_URL: `http://127.0.0.1:${port}`,
-    PORT: String(port),
-    HOST: '127.0.0.1',
-  };
-  spawnSync(process.execPath, ['--import', 'tsx', 'scripts/seed.ts'], { env: { ...env, NODE_ENV: 'development' } });
-  const app = spawn(process.execPath, ['--import', 'tsx', 'scripts/start.ts'], { env, stdio: 'ignore' });
+  const app = await startProduction({ name: 'bench-sqlite' });
   try {
-    for (let i = 0; i < 240; i++) {
-      if (
-        await fetch(`${env.APP_URL}/sign-in`).then(
-          (r) => r.status < 500,
-          () => false,
-        )
-      )
-        break;
-      await new Promise((r) => setTimeout(r, 250));
-    }
     for (const [pace, pauseMs] of PACES) {
-      const { figures, cpuMs } = await measuredSaves(env.APP_URL, [app.pid!], pauseMs);
+      const { figures, cpuMs } = await measuredSaves(app.url, [app.pid], pauseMs);
       printSaves(`SQLite, one process, ${pace}`, figures, cpuMs);
     }
   } finally {
-    app.kill('SIGTERM');
-    await new Promise((r) => app.once('exit', r));
-    rmSync(work, { recursive: true, force: true });
+    await app.stop();
   }
 }
 

@@ -12,20 +12,10 @@
  * lists public files when it starts) and removed afterwards.
  */
 import { rmSync, writeFileSync } from 'node:fs';
-import { createRequire } from 'node:module';
 import path from 'node:path';
 import { gzipSync } from 'node:zlib';
 import { startProduction } from './lib/production';
-
-interface CannonResult {
-  requests: { average: number; total: number };
-  latency: { p99: number; p50: number; average: number };
-  non2xx: number;
-  errors: number;
-}
-const autocannon = createRequire(import.meta.url)('autocannon') as (
-  opts: Record<string, unknown>,
-) => Promise<CannonResult>;
+import { autocannon, type CannonResult } from './lib/autocannon';
 
 const SECONDS = Number(process.argv[2] ?? 10);
 const CONNECTIONS = 64;

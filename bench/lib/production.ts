@@ -19,6 +19,8 @@ export interface Production {
   databaseFile: string;
   /** The first demo review, the one the workbench benchmarks open. */
   firstReviewId: number;
+  /** The server's process, for the CPU it spends. */
+  pid: number;
   smtp: FakeSmtp;
   /** The server's stderr, where it logs what became a 500. */
   logFile: string;
@@ -116,5 +118,5 @@ export async function startProduction(options: ProductionOptions = {}): Promise<
     }
     await new Promise((r) => setTimeout(r, 250));
   }
-  return { url, databaseFile, firstReviewId, smtp, logFile, stop };
+  return { url, databaseFile, firstReviewId, pid: server.pid!, smtp, logFile, stop };
 }

@@ -35,17 +35,20 @@ export async function requestSignUp(input: SignUpInput): Promise<void> {
   composeMailLater(() => signUpMail({ ...input, passwordHash }));
 }
 
-async function signUpMail(input: Omit<SignUpInput, 'password'> & { passwordHash: string }) {
+/** To a taken address: the note that an account exists, with the ways in — never a second account. */
+function accountExistsFor(user: User) {
   const appUrl = env().APP_URL;
+  return accountExistsMail({
+    to: user.email,
+    name: user.name,
+    signInUrl: `${appUrl}/sign-in`,
+    resetUrl: `${appUrl}/reset-password`,
+  });
+}
+
+async function signUpMail(input: Omit<SignUpInput, 'password'> & { passwordHash: string }) {
   const user = await User.findOne({ where: { email: input.email } });
-  if (user) {
-    return accountExistsMail({
-      to: user.email,
-      name: user.name,
-      signInUrl: `${appUrl}/sign-in`,
-      resetUrl: `${appUrl}/reset-password`,
-    });
-  }
+  if (user) return accountExistsFor(user);
   const { token, hash } = newToken();
   await PendingSignUp.create({
     email: input.email,
@@ -65,16 +68,8 @@ async function signUpMail(input: Omit<SignUpInput, 'password'> & { passwordHash:
  */
 export function resendSignUp(email: string): void {
   composeMailLater(async () => {
-    const appUrl = env().APP_URL;
     const user = await User.findOne({ where: { email } });
-    if (user) {
-      return accountExistsMail({
-        to: user.email,
-        name: user.name,
-        signInUrl: `${appUrl}/sign-in`,
-        resetUrl: `${appUrl}/reset-password`,
-      });
-    }
+    if (user) return accountExistsFor(user);
     const pending = await PendingSignUp.findOne({
       where: { email, usedAt: null, expiresAt: { [Op.gt]: new Date() } },
       order: [['id', 'DESC']],
