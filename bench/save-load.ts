@@ -7,7 +7,8 @@
  *
  * Two paces: `pauseMs` 0 (the default) saves back to back, a stress far above what the workbench
  * sends; `pauseMs` = AUTOSAVE_DELAY_MS waits the workbench's own autosave delay after each answer,
- * the fastest a coach who keeps typing can make it save (components/editor/use-autosave.ts).
+ * the fastest a coach who keeps typing can make it save (components/editor/use-autosave.ts), each
+ * coach starting at a different point of that delay.
  */
 import { newReview } from '../tests/helpers/review-input';
 
@@ -23,9 +24,14 @@ export interface SaveFigures {
 
 const COACHES = 16;
 
+/** The answer's JSON; an answer that is not JSON (a proxy's error page) as `{ error: <its start> }`. */
 async function json(res: Response) {
   const text = await res.text();
-  return text ? JSON.parse(text) : null;
+  try {
+    return text ? JSON.parse(text) : null;
+  } catch {
+    return { error: text.replace(/\s+/g, ' ').slice(0, 80) };
+  }
 }
 
 /** Signs a demo account in at `base`; returns its session cookie (name=value). */
@@ -75,6 +81,9 @@ export async function coachSaves(base: string, seconds: number, pauseMs = 0): Pr
     cookies.map(async (cookie, i) => {
       const own = owned[i];
       let n = 0;
+      // Coaches do not type in step: at the autosave pace each starts at its own point of the
+      // delay, so the load is spread as sixteen people's pauses would spread it.
+      if (pauseMs > 0) await new Promise((r) => setTimeout(r, (i / cookies.length) * pauseMs));
       while (Date.now() < until) {
         const target = i % 3 === 0 && n % 2 === 1 ? shared : own;
         const started = performance.now();

@@ -1,13 +1,12 @@
-import { createServer } from 'node:http';
-import { resolveClientAddress, trustedProxies } from '../lib/auth/client-address';
+import { trustedProxies } from '../lib/auth/client-address';
 import { env } from '../lib/env';
+import { createAppServer } from './app-server';
 import { loadLocalEnv, migrateDatabase, refusePendingMigrations } from './boot';
 
 /**
  * `npm start`: the production server on a built app — Next's request handler in a small custom
- * server (https://nextjs.org/docs/app/guides/custom-server) whose one job is to decide the
- * client's address from the socket and TRUSTED_PROXIES (lib/auth/client-address.ts) before the
- * app reads it. PORT (default 3000) and HOST (default: all interfaces); not HOSTNAME: containers
+ * server (https://nextjs.org/docs/app/guides/custom-server, scripts/app-server.ts) that decides
+ * the client's address from the socket and TRUSTED_PROXIES before the app reads it. PORT (default 3000) and HOST (default: all interfaces); not HOSTNAME: containers
  * set that to their own name. Caching is the framework's and the proxy's (docs/deployment.md).
  *
  * Before it, the database: on SQLite (one process, the embedded default) it migrates under the
@@ -28,13 +27,7 @@ async function main() {
   await app.prepare();
   const handle = app.getRequestHandler();
   const origin = `http://${hostname && hostname !== '0.0.0.0' ? hostname : '127.0.0.1'}:${port}`;
-  // The one x-forwarded-for the app reads: the socket's address, or a trusted proxy's word for it.
-  const proxies = trustedProxies(env().TRUSTED_PROXIES);
-  const server = createServer((req, res) => {
-    req.headers['x-forwarded-for'] = resolveClientAddress(req.socket.remoteAddress, req.headers['x-forwarded-for'], proxies);
-    delete req.headers['x-real-ip'];
-    return handle(req, res);
-  });
+  const server = createAppServer(handle, trustedProxies(env().TRUSTED_PROXIES));
   server.listen(port, hostname, () => console.log(`Loadbearing (production) listening on ${origin}`));
 
   const stop = () => {

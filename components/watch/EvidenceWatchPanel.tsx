@@ -60,7 +60,7 @@ export function EvidenceWatchPanel({ teamId, canRun }: { teamId: number; canRun:
       <CardBody className="space-y-4 text-sm">
         {error && <p role="alert">{errorMessage(error)}</p>}
         {message && <p role="alert">{message}</p>}
-        <RunLine run={run} />
+        <RunLine run={run} flagged={(data?.flags.length ?? 0) > 0} />
         {data && (
           <section aria-labelledby="flags-heading" className="space-y-2">
             <h3 id="flags-heading" className="font-semibold">
@@ -102,8 +102,18 @@ export function EvidenceWatchPanel({ teamId, canRun }: { teamId: number; canRun:
   );
 }
 
-function RunLine({ run }: { run: WatchRunDTO | null }) {
-  if (!run) return <p className="text-ink-muted">The watch has not run for this team yet.</p>;
+function RunLine({ run, flagged }: { run: WatchRunDTO | null; flagged: boolean }) {
+  if (!run) {
+    // Flags without a run on record come with the data (the demo seed writes them as a run would):
+    // say so rather than that nothing was ever checked.
+    return (
+      <p className="text-ink-muted">
+        {flagged
+          ? 'No run of the watch is on record for this team yet; the flags below were recorded before.'
+          : 'The watch has not run for this team yet.'}
+      </p>
+    );
+  }
   if (run.status === 'running') {
     return (
       <div className="space-y-1" aria-live="polite">
