@@ -67,3 +67,4 @@ Follow.belongsTo(User, { foreignKey: 'userId', as: 'user' });
 export { Follow, Publication, PublishedVersion };
 export { SignInThrottle } from './sign-in-throttle';
 export { PendingSignUp } from './pending-sign-up';
+export { MailRequest } from './mail-request';

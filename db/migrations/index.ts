@@ -6,6 +6,7 @@ import * as directionAndChecks from './20261202-01-direction-and-checks';
 import * as hardening from './20261202-02-hardening';
 import * as evidenceWatch from './20261202-05-evidence-watch';
 import * as pendingSignUps from './20261203-01-pending-sign-ups';
+import * as mailRequests from './20261203-02-mail-requests';
 
 /**
  * Every migration in the order it runs. Listed by hand (not globbed) so the same list works
@@ -21,4 +22,5 @@ export const migrations = [
   { name: '20261202-02-hardening', ...hardening },
   { name: '20261202-05-evidence-watch', ...evidenceWatch },
   { name: '20261203-01-pending-sign-ups', ...pendingSignUps },
+  { name: '20261203-02-mail-requests', ...mailRequests },
 ];

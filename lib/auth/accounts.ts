@@ -5,6 +5,7 @@ import { env } from '@/lib/env';
 import { passwordResetMail } from '@/lib/mail/templates';
 import { sendMailLater } from '@/lib/mail/send';
 import { PasswordResetToken, User } from '@/models';
+import { mayMailRecipient } from './mail-limit';
 import { checkPassword, DUMMY_HASH, hashPassword } from './password';
 import { assertNotLimitedAfter, clearFailures, succeeded, takeTry } from './rate-limit';
 import { endSessions } from './sessions';
@@ -39,6 +40,8 @@ export async function authenticate(input: { email: string; password: string }, a
  * (its time and a relay's failure never show in it).
  */
 export async function requestPasswordReset(email: string): Promise<void> {
+  // Counted for known and unknown addresses alike, so the answer's time tells nothing either.
+  if (!(await mayMailRecipient(email))) return;
   const user = await User.findOne({ where: { email } });
   if (!user) return;
   const { token, hash } = newToken();

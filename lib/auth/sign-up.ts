@@ -8,6 +8,7 @@ import { writeTransaction } from '@/lib/reviews/transaction';
 import { createTeam } from '@/lib/teams/teams';
 import { PendingSignUp, User } from '@/models';
 import type { PublicUser } from './accounts';
+import { mayMailRecipient } from './mail-limit';
 import { hashPassword } from './password';
 import { hashToken, newToken } from './tokens';
 
@@ -47,6 +48,7 @@ function accountExistsFor(user: User) {
 }
 
 async function signUpMail(input: Omit<SignUpInput, 'password'> & { passwordHash: string }) {
+  if (!(await mayMailRecipient(input.email))) return null;
   const user = await User.findOne({ where: { email: input.email } });
   if (user) return accountExistsFor(user);
   const { token, hash } = newToken();
@@ -68,6 +70,7 @@ async function signUpMail(input: Omit<SignUpInput, 'password'> & { passwordHash:
  */
 export function resendSignUp(email: string): void {
   composeMailLater(async () => {
+    if (!(await mayMailRecipient(email))) return null;
     const user = await User.findOne({ where: { email } });
     if (user) return accountExistsFor(user);
     const pending = await PendingSignUp.findOne({
