@@ -30,13 +30,16 @@ export const signInAction = formAction(signInSchema.extend({ next }), async (dat
 });
 
 /** The same answer for every address: what happens next is in the mail (lib/auth/sign-up.ts). */
-export const signUpAction = formAction(signUpSchema.extend({ next }), async (data) => {
-  await requestSignUp({ name: data.name, email: data.email, password: data.password, teamName: data.teamName });
+export const signUpAction = formAction(signUpSchema.extend({ next }), async (data, { address }) => {
+  await requestSignUp(
+    { name: data.name, email: data.email, password: data.password, teamName: data.teamName },
+    address,
+  );
   return { ok: true, values: { email: data.email, name: data.name, teamName: data.teamName } };
 });
 
-export const resendSignUpAction = formAction(signUpResendSchema, async (data) => {
-  resendSignUp(data.email);
+export const resendSignUpAction = formAction(signUpResendSchema, async (data, { address }) => {
+  await resendSignUp(data.email, address);
   return { ok: true, message: `We sent the link to ${data.email} again.`, values: { email: data.email } };
 });
 
@@ -46,8 +49,8 @@ export const confirmSignUpAction = formAction(signUpConfirmSchema, async (data, 
   redirect('/dashboard');
 });
 
-export const requestResetAction = formAction(resetRequestSchema, async (data) => {
-  await requestPasswordReset(data.email);
+export const requestResetAction = formAction(resetRequestSchema, async (data, { address }) => {
+  await requestPasswordReset(data.email, address);
   return {
     ok: true,
     message: `If an account uses ${data.email}, a reset link is on its way. It works once, for one hour.`,

@@ -5,7 +5,7 @@ import { env } from '@/lib/env';
 import { passwordResetMail } from '@/lib/mail/templates';
 import { sendMailLater } from '@/lib/mail/send';
 import { PasswordResetToken, User } from '@/models';
-import { mayMailRecipient } from './mail-limit';
+import { mayMailRecipient, takeMailRequest } from './mail-limit';
 import { checkPassword, DUMMY_HASH, hashPassword } from './password';
 import { assertNotLimitedAfter, clearFailures, succeeded, takeTry } from './rate-limit';
 import { endSessions } from './sessions';
@@ -39,7 +39,8 @@ export async function authenticate(input: { email: string; password: string }, a
  * so the form cannot be used to find out who is registered: the mail goes out after the answer
  * (its time and a relay's failure never show in it).
  */
-export async function requestPasswordReset(email: string): Promise<void> {
+export async function requestPasswordReset(email: string, address: string): Promise<void> {
+  await takeMailRequest(address);
   // Counted for known and unknown addresses alike, so the answer's time tells nothing either.
   if (!(await mayMailRecipient(email))) return;
   const user = await User.findOne({ where: { email } });

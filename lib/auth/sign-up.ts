@@ -8,7 +8,7 @@ import { writeTransaction } from '@/lib/reviews/transaction';
 import { createTeam } from '@/lib/teams/teams';
 import { PendingSignUp, User } from '@/models';
 import type { PublicUser } from './accounts';
-import { mayMailRecipient } from './mail-limit';
+import { mayMailRecipient, takeMailRequest } from './mail-limit';
 import { hashPassword } from './password';
 import { hashToken, newToken } from './tokens';
 
@@ -29,9 +29,11 @@ export interface SignUpInput {
  * creates the account, a taken one a note to sign in or reset the password. Neither the lookup,
  * the write, the relay's time nor its failure can show in the answer — so sign-up cannot be used
  * to find out who has an account (OWASP Authentication Cheat Sheet, "Authentication and Error
- * Messages").
+ * Messages"). Each request takes one of the client address's mail requests (429 past its share)
+ * and each mail one of the inbox's (lib/auth/mail-limit.ts).
  */
-export async function requestSignUp(input: SignUpInput): Promise<void> {
+export async function requestSignUp(input: SignUpInput, address: string): Promise<void> {
+  await takeMailRequest(address);
   const passwordHash = await hashPassword(input.password);
   composeMailLater(() => signUpMail({ ...input, passwordHash }));
 }
@@ -68,7 +70,8 @@ async function signUpMail(input: Omit<SignUpInput, 'password'> & { passwordHash:
  * stops working), the account note again for a taken address, nothing for an unknown one. The
  * answer is the same in every case, for the same reason as requestSignUp.
  */
-export function resendSignUp(email: string): void {
+export async function resendSignUp(email: string, address: string): Promise<void> {
+  await takeMailRequest(address);
   composeMailLater(async () => {
     if (!(await mayMailRecipient(email))) return null;
     const user = await User.findOne({ where: { email } });

@@ -114,6 +114,20 @@ describe('signing up, in and out', () => {
     await expect.poll(() => page.getByText(/Too many failed sign-ins/).isVisible()).toBe(true);
     await context.close();
   });
+
+  it('asking for too many mails from one network says so on the form (server action, not only the API)', async () => {
+    const context = await browser.newContext();
+    const page = await context.newPage();
+    await page.goto('/reset-password');
+    // lib/auth/mail-limit.ts: 10 mail requests per client address per hour.
+    for (let i = 0; i <= 10; i++) {
+      await page.fill('input[name=email]', `nobody-${i}@mail-limit.test`);
+      await page.getByRole('button', { name: 'Send reset link' }).click();
+      await page.waitForSelector(`text=/nobody-${i}@mail-limit.test, a reset link|Too many e-mails/`, SLOW);
+    }
+    await expect.poll(() => page.getByText(/Too many e-mails asked for from this network/).isVisible()).toBe(true);
+    await context.close();
+  });
 });
 
 describe('inviting a colleague', () => {

@@ -1,5 +1,4 @@
 import { route } from '@/lib/auth/handler';
-import { takeMailRequest } from '@/lib/auth/mail-limit';
 import { requestSignUp } from '@/lib/auth/sign-up';
 import { signUpSchema } from '@/lib/validation/auth';
 
@@ -7,7 +6,6 @@ import { signUpSchema } from '@/lib/validation/auth';
 // already have an account") goes out after it (lib/auth/sign-up.ts); 429 past the mail limit of
 // the client address (lib/auth/mail-limit.ts).
 export const POST = route({ auth: 'optional', body: signUpSchema }, async ({ body, address }) => {
-  await takeMailRequest(address);
-  await requestSignUp(body);
+  await requestSignUp(body, address);
   return Response.json({ status: 'check-your-mail' }, { status: 202 });
 });
