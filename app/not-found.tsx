@@ -1,11 +1,16 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
+import { connection } from 'next/server';
 import { LogoMark } from '@/components/layout/Logo';
 import { NotFoundPanel } from '@/components/layout/NotFoundPanel';
 
 export const metadata: Metadata = { title: 'Not found' };
 
-export default function NotFound() {
+export default async function NotFound() {
+  // Rendered per request, never prerendered: every page carries the request's CSP nonce on its
+  // scripts (proxy.ts), and a page built ahead of time has none, so the browser would block them
+  // (https://nextjs.org/docs/app/guides/content-security-policy, "Nonces").
+  await connection();
   return (
     <div className="flex flex-1 flex-col justify-center">
       {/* An unknown address, and a verdict that is missing or not this reader's (the Pages Router's 404s
@@ -15,8 +20,8 @@ export default function NotFound() {
       </p>
       <NotFoundPanel title="Nothing is hanging on this hold">
         <p>
-          The page you asked for does not exist, or it belongs to a team you are not in — a verdict shared only with
-          its team’s members, for instance. Check the address; if you are a member,{' '}
+          The page you asked for does not exist, or it belongs to a team you are not in — a verdict shared only with its
+          team’s members, for instance. Check the address; if you are a member,{' '}
           <Link className="prose-link" href="/sign-in">
             sign in
           </Link>{' '}

@@ -2,46 +2,9 @@
 
 import { Badge } from '@/components/ui/Badge';
 import { Button } from '@/components/ui/Button';
-import type { LoadUnit, ReviewDTO } from '@/lib/reviews/types';
-import { EFFORT_LABEL, percent, REVIEW_STATUS_LABEL, TRAINING_STATUS_LABEL } from './labels';
-
-const LOAD_UNIT_SHORT: Record<LoadUnit, string> = {
-  'percent-max': '% of max',
-  'percent-1rm': '%1RM',
-  'percent-mvc': '%MVC',
-  'percent-bodyweight': '% body weight',
-  'kg-added': 'kg added',
-};
-
-/** The protocol in one line a coach reads at a glance. */
-export function protocolSummary(review: ReviewDTO): string {
-  const p = review.protocol;
-  const parts: string[] = [];
-  if (p.exercise) parts.push(p.exercise);
-  if (p.loadValue !== null && p.loadUnit) parts.push(`${p.loadValue} ${LOAD_UNIT_SHORT[p.loadUnit]}`);
-  // Body-weight loads only mean something next to the athlete's maximum: show the conversion.
-  if (p.intensity !== null && (p.loadUnit === 'percent-bodyweight' || p.loadUnit === 'kg-added')) {
-    parts.push(`≈ ${percent(p.intensity)} of max`);
-  }
-  const dose = [
-    p.secondsPerSet !== null ? `${p.secondsPerSet} s` : null,
-    p.setsPerSession !== null ? `× ${p.setsPerSession} set${p.setsPerSession === 1 ? '' : 's'}` : null,
-    p.sessionsPerDay !== null ? `× ${p.sessionsPerDay} session${p.sessionsPerDay === 1 ? '' : 's'}/day` : null,
-    p.daysPerWeek !== null ? `· ${p.daysPerWeek} days/week` : null,
-  ]
-    .filter(Boolean)
-    .join(' ');
-  if (dose) parts.push(dose);
-  if (p.minHoursBetween !== null) parts.push(`≥ ${p.minHoursBetween} h apart`);
-  if (p.weeks !== null) parts.push(`${p.weeks} weeks`);
-  if (p.effort) parts.push(`effort ${EFFORT_LABEL[p.effort].toLowerCase()}`);
-  return parts.join(' · ') || 'No protocol recorded';
-}
-
-export function populationSummary(review: ReviewDTO): string {
-  const { status, injured } = review.population;
-  return `${status ? TRAINING_STATUS_LABEL[status] : 'Any training status'}, ${injured ? 'injured' : 'healthy'}`;
-}
+import type { ReviewDTO } from '@/lib/reviews/types';
+import { REVIEW_STATUS_LABEL } from './labels';
+import { populationSummary, protocolSummary } from './summaries';
 
 /** The claim under review, as the top of the workbench. */
 export function ReviewHeader({
@@ -95,9 +58,9 @@ export function ReviewHeader({
       </blockquote>
       <dl className="grid gap-x-6 gap-y-2 text-sm sm:grid-cols-[auto_1fr]">
         <dt className="font-semibold">Protocol</dt>
-        <dd className="text-ink-muted">{protocolSummary(review)}</dd>
+        <dd className="text-ink-muted">{protocolSummary(review.protocol)}</dd>
         <dt className="font-semibold">For</dt>
-        <dd className="text-ink-muted">{populationSummary(review)}</dd>
+        <dd className="text-ink-muted">{populationSummary(review.population)}</dd>
         {review.tags.length > 0 && (
           <>
             <dt className="font-semibold">Tags</dt>

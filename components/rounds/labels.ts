@@ -1,5 +1,4 @@
 import { LIKELIHOOD_BANDS } from '@/lib/scoring/likelihood';
-import type { ProtocolDTO } from '@/lib/reviews/types';
 
 /** The seven likelihood terms in band order (0 … 6), as the reviewer reads them. */
 export const BAND_TERMS = LIKELIHOOD_BANDS.map((b) => b.term);
@@ -15,25 +14,6 @@ export function bandRange(index: number): string {
 
 const capitalize = (s: string) => s.charAt(0).toUpperCase() + s.slice(1);
 export const bandLabel = (index: number) => capitalize(BAND_TERMS[index]);
-
-/** The protocol in one line (the same facts the workbench header shows). */
-export function protocolLine(p: ProtocolDTO): string {
-  const parts: string[] = [];
-  if (p.exercise) parts.push(p.exercise);
-  if (p.intensity !== null) parts.push(`≈ ${Math.round(p.intensity * 100)} % of max`);
-  const dose = [
-    p.secondsPerSet !== null ? `${p.secondsPerSet} s` : null,
-    p.setsPerSession !== null ? `× ${p.setsPerSession} sets` : null,
-    p.sessionsPerDay !== null ? `× ${p.sessionsPerDay}/day` : null,
-    p.daysPerWeek !== null ? `${p.daysPerWeek} days/week` : null,
-  ]
-    .filter(Boolean)
-    .join(' ');
-  if (dose) parts.push(dose);
-  if (p.weeks !== null) parts.push(`${p.weeks} weeks`);
-  if (p.effort) parts.push(`effort: ${p.effort.replace('-', ' ')}`);
-  return parts.join(' · ') || 'No protocol recorded';
-}
 
 export const AUDIT_LABEL: Record<string, string> = {
   'round.opened': 'opened the round',

@@ -1,7 +1,7 @@
 import { Op } from 'sequelize';
 import { notFound } from '@/lib/api/errors';
 import { decide, type Actor } from '@/lib/auth/policy';
-import { toProtocolDTO } from '@/lib/reviews/rows';
+import { toPopulationDTO, toProtocolDTO } from '@/lib/reviews/rows';
 import { loadReviewData, verdictFromData } from '@/lib/reviews/verdict';
 import { pickDomains } from '@/lib/scoring/appraisal-vocabulary';
 import { bodyReferences } from '@/lib/validation/reviews';
@@ -253,7 +253,7 @@ export async function scorecardView(
       claimUrl: review.claimUrl,
       authorName: author.get(review.authorId) ?? 'Former member',
       protocol: toProtocolDTO(review.protocol),
-      population: { status: review.populationStatus, injured: review.populationInjured },
+      population: toPopulationDTO(review),
       body: review.body,
     },
     mechanisms: blindMechanisms,

@@ -1,4 +1,4 @@
-import type { ProtocolDTO } from '@/lib/reviews/types';
+import type { PopulationDTO, ProtocolDTO } from '@/lib/reviews/types';
 import type { DowngradeDomain } from '@/lib/scoring/appraisal-vocabulary';
 
 /**
@@ -126,7 +126,7 @@ export interface ScorecardViewDTO {
     claimUrl: string | null;
     authorName: string;
     protocol: ProtocolDTO;
-    population: { status: string | null; injured: boolean };
+    population: PopulationDTO;
     body: Record<string, unknown>;
   };
   mechanisms: BlindMechanismDTO[];

@@ -3,7 +3,7 @@
 import { LocalTime } from '@/components/review/LocalTime';
 import { Badge } from '@/components/ui/Badge';
 import type { ScorecardViewDTO } from '@/lib/rounds/types';
-import { protocolLine } from '../labels';
+import { populationSummary, protocolSummary } from '@/components/review/summaries';
 
 /** What is being reviewed, by whom, until when, and where the reviewer stands. */
 export function ScorecardHeader({
@@ -32,11 +32,9 @@ export function ScorecardHeader({
       </blockquote>
       <dl className="grid gap-x-6 gap-y-1 text-sm sm:grid-cols-[auto_1fr]">
         <dt className="font-semibold">Protocol</dt>
-        <dd className="text-ink-muted">{protocolLine(review.protocol)}</dd>
+        <dd className="text-ink-muted">{protocolSummary(review.protocol)}</dd>
         <dt className="font-semibold">For</dt>
-        <dd className="text-ink-muted">
-          {review.population.status ?? 'any training status'}, {review.population.injured ? 'injured' : 'healthy'}
-        </dd>
+        <dd className="text-ink-muted">{populationSummary(review.population)}</dd>
       </dl>
       {round.note && (
         <p className="border-line bg-paper-sunken rounded-md border px-4 py-3 text-sm">
