@@ -13,8 +13,8 @@ export default async function NotFound() {
   await connection();
   return (
     <div className="flex flex-1 flex-col justify-center">
-      {/* An unknown address, and a verdict that is missing or not this reader's (the Pages Router's 404s
-          render here too), show in the root layout only, which has no header to say where you are. */}
+      {/* An unknown address shows in the root layout only, which has no header to say where you are
+          (a missing verdict has its own page without scripts: components/verdict-page/MissingVerdictPage.tsx). */}
       <p className="max-w-measure px-gutter mx-auto w-full pt-10" aria-hidden="true">
         <LogoMark className="size-10" />
       </p>

@@ -22,8 +22,16 @@ describe('security headers', () => {
     const context = await browser.newContext();
     const page = await context.newPage();
     const found: string[] = [];
-    // An unknown address too: the 404 page is the framework's own, and must carry the nonce like any page.
-    for (const path of ['/', '/sign-in', '/sign-up', '/reset-password', '/verdicts', '/no-such-page'])
+    // Unknown addresses too: the 404 pages must work under the policy like any page.
+    for (const path of [
+      '/',
+      '/sign-in',
+      '/sign-up',
+      '/reset-password',
+      '/verdicts',
+      '/no-such-page',
+      '/v/no-such-verdict',
+    ])
       found.push(...(await violations(page, path)));
     await page.goto('/sign-in');
     // The owner: auth.e2e.ts tries wrong passwords for the coach, which delays that account.
@@ -41,7 +49,7 @@ describe('security headers', () => {
     // React really ran (a client component answered a click would fail without its scripts).
     expect(await page.evaluate(() => typeof (window as unknown as { next?: unknown }).next)).toBe('object');
     await context.close();
-    // Thirteen pages, each until the network is idle: minutes on a busy machine.
+    // Fourteen pages, each until the network is idle: minutes on a busy machine.
   }, 180_000);
 
   it('sends the headers on pages, API answers and files', async () => {

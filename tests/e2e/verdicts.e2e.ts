@@ -9,7 +9,6 @@ const browser = useBrowser();
 const ATHLETE = 'athlete2@granite-hollow.test';
 const PHONE = { width: 375, height: 812 };
 
-
 async function seriousAxeViolations(page: Page) {
   // Evaluated, not added as a <script>: the verdict page's policy lets no script tag run.
   await page.evaluate(axe.source);
@@ -148,10 +147,13 @@ describe('what a signed-out visitor sees', () => {
     await page.getByRole('link', { name: 'Version 1' }).click();
     await expect.poll(() => page.getByText(/You are reading version 1, an earlier version/).isVisible()).toBe(true);
 
+    scripts.length = 0; // the versions pages above are App Router pages, with their scripts
     const hidden = await page.goto('/v/weighted-pull-up-ladder');
     expect(hidden?.status()).toBe(404);
-    expect(await page.getByRole('heading', { level: 1 }).textContent()).toBe('Nothing is hanging on this hold');
-    expect(await page.getByText(/a verdict shared only with its team/).isVisible()).toBe(true);
+    expect(await page.getByRole('heading', { level: 1 }).textContent()).toBe('This verdict was not found');
+    expect(await page.getByText(/the verdict is shared only with its team’s members/).isVisible()).toBe(true);
+    // Its 404 is as plain as the verdict page: still no JavaScript.
+    expect(scripts).toEqual([]);
     expect(await page.content()).not.toMatch(/lock-off/i);
 
     const feed = await page.request.get('/feed.xml');

@@ -1,5 +1,6 @@
 import type { GetServerSideProps, PageConfig } from 'next';
 import { LatestVerdictPage } from '@/components/verdict-page/LatestVerdictPage';
+import { MissingVerdictPage } from '@/components/verdict-page/MissingVerdictPage';
 import { publicVerdictCacheHeaders } from '@/lib/publishing/page-cache-control';
 import { findVerdictPage } from '@/lib/publishing/queries';
 import type { VerdictPageDTO } from '@/lib/publishing/types';
@@ -10,7 +11,9 @@ import type { VerdictPageDTO } from '@/lib/publishing/types';
  * for at most one second (lib/publishing/page-cache-control.ts): the nginx in front
  * (deploy/nginx/loadbearing.conf) answers nearly every reader from that copy, and a publish,
  * withdrawal or deletion on any app process shows to every reader within the stated bound
- * (docs/deployment.md). Team-only and unknown slugs are 404 here. Signed-in readers never reach
+ * (docs/deployment.md). Team-only and unknown slugs are 404 here, answered by this page itself
+ * (no JavaScript, like the verdict) rather than the app's not-found page, whose scripts the
+ * verdict page's `script-src 'none'` policy would block. Signed-in readers never reach
  * this page: proxy.ts sends them to ./signed-in, which checks membership.
  *
  * Why the Pages Router: athletes read this on phones, and the page is plain reading. Here Next
@@ -19,16 +22,17 @@ import type { VerdictPageDTO } from '@/lib/publishing/types';
  */
 export const config: PageConfig = { unstable_runtimeJS: false };
 
-export const getServerSideProps: GetServerSideProps<{ page: VerdictPageDTO }, { slug: string }> = async ({
+export const getServerSideProps: GetServerSideProps<{ page: VerdictPageDTO | null }, { slug: string }> = async ({
   params,
   res,
 }) => {
   for (const [name, value] of Object.entries(publicVerdictCacheHeaders())) res.setHeader(name, value);
   const page = await findVerdictPage(params?.slug ?? '', null);
-  if (!page) return { notFound: true };
+  if (!page) res.statusCode = 404;
   return { props: { page } };
 };
 
-export default function PublicVerdictPage({ page }: { page: VerdictPageDTO }) {
+export default function PublicVerdictPage({ page }: { page: VerdictPageDTO | null }) {
+  if (!page) return <MissingVerdictPage signedIn={false} />;
   return <LatestVerdictPage page={page} signedIn={false} />;
 }

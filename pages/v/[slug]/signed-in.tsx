@@ -1,5 +1,6 @@
 import type { GetServerSideProps, PageConfig } from 'next';
 import { LatestVerdictPage } from '@/components/verdict-page/LatestVerdictPage';
+import { MissingVerdictPage } from '@/components/verdict-page/MissingVerdictPage';
 import { actorFromRequest } from '@/lib/auth/request-actor';
 import { findVerdictPage } from '@/lib/publishing/queries';
 import type { VerdictPageDTO } from '@/lib/publishing/types';
@@ -12,15 +13,17 @@ import type { VerdictPageDTO } from '@/lib/publishing/types';
 export const config: PageConfig = { unstable_runtimeJS: false };
 
 export const getServerSideProps: GetServerSideProps<
-  { page: VerdictPageDTO; signedIn: boolean },
+  { page: VerdictPageDTO | null; signedIn: boolean },
   { slug: string }
 > = async ({ params, req, res }) => {
   const actor = await actorFromRequest(req, res);
   const page = await findVerdictPage(params?.slug ?? '', actor);
-  if (!page) return { notFound: true };
+  // 404 on this page itself, without JavaScript, like the verdict (./index.tsx).
+  if (!page) res.statusCode = 404;
   return { props: { page, signedIn: actor !== null } };
 };
 
-export default function ReaderVerdictPage({ page, signedIn }: { page: VerdictPageDTO; signedIn: boolean }) {
+export default function ReaderVerdictPage({ page, signedIn }: { page: VerdictPageDTO | null; signedIn: boolean }) {
+  if (!page) return <MissingVerdictPage signedIn={signedIn} />;
   return <LatestVerdictPage page={page} signedIn={signedIn} />;
 }
