@@ -18,7 +18,7 @@ export function fromZod(error: ZodError): AppError {
   );
 }
 
-/** Turns anything thrown into the JSON error body of API.md. */
+/** Turns anything thrown into the JSON error body of docs/api/README.md. */
 export function errorResponse(error: unknown): Response {
   const appError = error instanceof AppError ? error : error instanceof ZodError ? fromZod(error) : busyError(error);
   if (!appError) {

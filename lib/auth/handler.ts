@@ -30,7 +30,7 @@ interface RouteOptions<P, B, Q> {
   query?: z.ZodType<Q>;
   /** 'required' (default) answers 401 before the handler runs when signed out. */
   auth?: 'required' | 'optional';
-  /** The route reads a multipart upload itself (documented in API.md); otherwise bodies are JSON. */
+  /** The route reads a multipart upload itself (documented in docs/api/); otherwise bodies are JSON. */
   multipart?: boolean;
 }
 
@@ -39,7 +39,7 @@ type NextRouteContext = { params: Promise<Record<string, string | string[]>> };
 /**
  * The one wrapper of every route handler: reads the session, loads the actor, validates params,
  * query and JSON body with zod, hands the handler the policy, and turns whatever it throws into
- * the error JSON of API.md. A handler returns a Response or a value to send as JSON.
+ * the error JSON of docs/api/README.md. A handler returns a Response or a value to send as JSON.
  *
  * @example
  * export const GET = route({ params: teamParams }, async ({ params, authorize }) => {

@@ -433,7 +433,7 @@ export const DEFAULT_SPREAD_FLAG = 2;
 
 /**
  * Epley's one-repetition-maximum formula: 1RM = w · (1 + r / 30).
- * Source: Epley (1985), as cited in REFERENCE-VALUES.md.
+ * Source: Epley, B. (1985), Poundage chart, Boyd Epley Workout (from memory); docs/scoring.md §8.
  *
  * @example
  * EPLEY_DIVISOR; // 30

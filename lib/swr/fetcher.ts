@@ -1,6 +1,6 @@
 /**
  * The one way the browser talks to our route handlers. Every route answers errors as
- * `{ error, issues? }` (API.md); this turns that body into a thrown `ApiError` that keeps the
+ * `{ error, issues? }` (docs/api/README.md); this turns that body into a thrown `ApiError` that keeps the
  * status, the field issues and the whole body — forms need the issues, the editor needs the
  * 409 body (it carries the current review), and swr needs a rejected promise to show an error.
  */

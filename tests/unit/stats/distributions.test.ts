@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { chiSquareUpperTail, normalQuantile, normalTwoSidedP, studentTQuantile } from '@/lib/stats/distributions';
 import { ScoringInputError } from '@/lib/scoring/errors';
 
-describe('distributions from jstat 1.9.6 (REFERENCE-VALUES.md, "Reference libraries from the registry")', () => {
+describe('distributions from jstat 1.9.6 (npm `jstat`, a general-purpose reference library from the registry)', () => {
   it('normal 97.5 % quantile 1.959964', () => {
     expect(Math.abs(normalQuantile(0.975) - 1.959964)).toBeLessThanOrEqual(1e-6);
   });

@@ -6,7 +6,7 @@ import { ScoringInputError } from '@/lib/scoring/errors';
 import { BCG } from './fixtures';
 
 describe('smdFromMeans — Borenstein, Hedges, Higgins & Rothstein (2009), Introduction to Meta-Analysis, ch. 4 worked example', () => {
-  // Means 103 / 100, SDs 5.5 / 4.5, n 50 / 50 (REFERENCE-VALUES.md).
+  // Means 103 / 100, SDs 5.5 / 4.5, n 50 / 50: the book's worked example.
   const r = smdFromMeans({ m1: 103, sd1: 5.5, n1: 50, m2: 100, sd2: 4.5, n2: 50 });
   it.each([
     ['S_within', r.sWithin, 5.0249],
@@ -61,7 +61,7 @@ describe('logRiskRatio and logOddsRatio — 2×2 tables', () => {
     });
   });
 
-  it('compute the log risk ratio by the formula of REFERENCE-VALUES.md for every BCG trial', () => {
+  it('compute the log risk ratio by the textbook formula for every BCG trial (Borenstein et al. 2009, ch. 5 — from memory)', () => {
     for (const [a, b, c, d] of BCG) {
       const r = logRiskRatio({ a, b, c, d });
       expect(r.yi).toBeCloseTo(Math.log(a / (a + b) / (c / (c + d))), 14);

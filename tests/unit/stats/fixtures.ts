@@ -7,7 +7,7 @@
 
 /**
  * BCG vaccine trials (Colditz et al. 1994, JAMA 271:698–702), as in metafor/metadat `dat.bcg`
- * (REFERENCE-VALUES.md): [tpos, tneg, cpos, cneg] = TB+ / TB− vaccinated, TB+ / TB− control.
+ * (R package metadat): [tpos, tneg, cpos, cneg] = TB+ / TB− vaccinated, TB+ / TB− control.
  */
 export const BCG: readonly (readonly [number, number, number, number])[] = [
   [4, 119, 11, 128],

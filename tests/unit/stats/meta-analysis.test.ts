@@ -38,7 +38,7 @@ describe('BCG trials, log risk ratios — metafor tests/testthat/test_misc_metan
     near(r.I2, 92.1173);
   });
 
-  it('p(Q) for Q 152.2 on 12 df is below 1e-16, where jstat’s χ² tail underflows to 0 (REFERENCE-VALUES.md)', () => {
+  it('p(Q) for Q 152.2 on 12 df is below 1e-16, where jstat’s χ² tail underflows to 0 (computed from the BCG data of Colditz et al. 1994)', () => {
     const r = metaAnalysis(bcgRR);
     expect(r.pQ).toBeGreaterThanOrEqual(0);
     expect(r.pQ).toBeLessThan(1e-16);
@@ -48,7 +48,7 @@ describe('BCG trials, log risk ratios — metafor tests/testthat/test_misc_metan
     near(metaAnalysis(bcgRR).H2 as number, 12.6861);
   });
 
-  it('DerSimonian–Laird SE 0.178742 and 95 % prediction interval [−1.9988, 0.5706] with t(11) (computed, REFERENCE-VALUES.md)', () => {
+  it('DerSimonian–Laird SE 0.178742 and 95 % prediction interval [−1.9988, 0.5706] with t(11) (computed from the BCG data; the interval after Higgins, Thompson & Spiegelhalter 2009 — from memory)', () => {
     const r = metaAnalysis(bcgRR);
     near(r.se, 0.178742, 1e-6);
     near((r.predictionInterval as [number, number])[0], -1.9988);
