@@ -49,11 +49,13 @@ const live = (row: SignInThrottle | null, now: number) =>
  * Takes one try for this e-mail from this address, or throws 429 with Retry-After. The try
  * counts as a failure until `succeeded` gives it back.
  */
-export async function takeTry(email: string, address: string, now = Date.now()): Promise<TryCounts> {
+export async function takeTry(email: string, address: string, clock?: number): Promise<TryCounts> {
   // Read, check, then write: on PostgreSQL the two rows' locks make concurrent tries (from any
-  // process) count one after another (lib/reviews/transaction.ts).
+  // process) count one after another (lib/reviews/transaction.ts). The clock is read once the
+  // try has its turn, so it is never earlier than the last failure another try wrote.
   return writeTransaction(
     async (transaction) => {
+      const now = clock ?? Date.now();
       const [byEmail, byAddress] = await Promise.all(
         [emailKey(email), addressKey(address)].map(async (key) =>
           live(await SignInThrottle.findByPk(key, { transaction }), now),
@@ -102,7 +104,9 @@ function assertNotLimited(byEmail: SignInThrottle | null, byAddress: SignInThrot
   if (byAddress && byAddress.failures >= MAX_FAILURES && now - byAddress.firstFailureAt.getTime() < WINDOW_MS) {
     throw limited(byAddress.firstFailureAt.getTime() + WINDOW_MS - now, ADDRESS_MESSAGE);
   }
-  const wait = byEmail ? byEmail.lastFailureAt.getTime() + accountDelayMs(byEmail.failures) - now : 0;
+  // Below the limit there is no delay at all, whichever try's clock read first.
+  const delay = byEmail ? accountDelayMs(byEmail.failures) : 0;
+  const wait = byEmail && delay > 0 ? byEmail.lastFailureAt.getTime() + delay - now : 0;
   if (wait > 0) throw limited(wait, ACCOUNT_MESSAGE);
 }
 

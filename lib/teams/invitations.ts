@@ -1,4 +1,3 @@
-import { Op } from 'sequelize';
 import { badRequest, conflict, notFound } from '@/lib/api/errors';
 import { recordEvent } from '@/lib/audit/record';
 import { hashPassword } from '@/lib/auth/password';
@@ -67,13 +66,21 @@ export interface InvitationView {
   accountExists: boolean;
 }
 
+/**
+ * The invitation behind a link that can still be accepted. A link someone has just used is a 409,
+ * not a 404: of two people accepting at once, the one who reads after the other's commit is
+ * told the same as the one who loses the conditional UPDATE below.
+ */
 async function openInvitation(token: string): Promise<Invitation> {
-  const invitation = await Invitation.findOne({
-    where: { tokenHash: hashToken(token), acceptedAt: null, expiresAt: { [Op.gt]: new Date() } },
-  });
-  if (!invitation) throw notFound('This invitation (it may have expired or been used)');
+  const invitation = await Invitation.findOne({ where: { tokenHash: hashToken(token) } });
+  if (invitation?.acceptedAt) throw conflict(USED);
+  if (!invitation || invitation.expiresAt.getTime() <= Date.now()) {
+    throw notFound('This invitation (it may have expired or been used)');
+  }
   return invitation;
 }
+
+const USED = 'This invitation was already used. Ask the team for a new one.';
 
 export async function viewInvitation(token: string): Promise<InvitationView> {
   const invitation = await openInvitation(token);
@@ -100,7 +107,7 @@ export async function acceptInvitation(
       { acceptedAt: new Date() },
       { where: { id: invitation.id, acceptedAt: null }, transaction },
     );
-    if (!spent) throw conflict('This invitation was already used. Ask the team for a new one.');
+    if (!spent) throw conflict(USED);
     let userId: number;
     if ('userId' in who) {
       userId = who.userId;

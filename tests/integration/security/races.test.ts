@@ -50,4 +50,22 @@ describe('racing writes', () => {
     expect([a.status, b.status].sort()).toEqual([200, 409]);
     expect(await Membership.count({ where: { teamId: t.otherTeamId } })).toBe(2);
   });
+
+  // The loser of the race above may read the invitation after the winner has committed: it is
+  // told the link was used (409), as if they had arrived together, not that it never existed.
+  it('an invitation accepted a moment after someone else gets 409, not 404', async () => {
+    const { token, hash } = newToken();
+    await Invitation.create({
+      teamId: t.otherTeamId,
+      email: 'late-link@example.test',
+      role: 'coach',
+      tokenHash: hash,
+      invitedById: t.userIds.outsider,
+      expiresAt: new Date(Date.now() + 3_600_000),
+    });
+    const first = await t.coach.call(accept.POST, { params: { token }, json: {} });
+    const second = await t.owner.call(accept.POST, { params: { token }, json: {} });
+    expect([first.status, second.status]).toEqual([200, 409]);
+    expect(second.body.error).toMatch(/already used/);
+  });
 });

@@ -40,7 +40,7 @@ describe('invitations', () => {
     expect(who.body.teams).toEqual([expect.objectContaining({ name: 'Crux Lab', role: 'coach' })]);
 
     const reused = await new Client().call(accept.POST, { params: { token }, json: { name: 'X', password: 'another-password' } });
-    expect(reused.status).toBe(404);
+    expect(reused.status).toBe(409);
   });
 
   it('an existing account accepts while signed in', async () => {
