@@ -1,6 +1,5 @@
-import { AsyncLocalStorage } from 'node:async_hooks';
 import { QueryTypes, Transaction, type Sequelize } from 'sequelize';
-import { busy } from '@/lib/api/errors';
+import { WriteQueue } from '@/lib/write-queue';
 
 /**
  * SQLite has one writer at a time (https://www.sqlite.org/lockingv3.html). Sequelize opens a
@@ -15,9 +14,6 @@ import { busy } from '@/lib/api/errors';
  * Only for SQLite: lib/db.ts applies it to the SQLite connection alone.
  */
 
-/** How long a write waits for its turn before the request answers 503. */
-export const WRITE_WAIT_MS = 10_000;
-
 const READ_TYPES = new Set<string>([
   QueryTypes.SELECT,
   QueryTypes.SHOWTABLES,
@@ -31,66 +27,6 @@ export function isWriteStatement(sql: unknown, type: string | undefined): boolea
   if (type && READ_TYPES.has(type)) return false;
   const text = typeof sql === 'string' ? sql : ((sql as { query?: string } | null)?.query ?? '');
   return !/^\s*(select|pragma\s+\w+\s*;?\s*$|explain)\b/i.test(text);
-}
-
-/** A FIFO lock with a time limit on waiting; the holder's async context is marked so it never waits on itself. */
-export class WriteQueue {
-  private held = false;
-  private readonly waiters: Array<() => void> = [];
-  private readonly holder = new AsyncLocalStorage<true>();
-  private meanHoldMs = 5;
-
-  constructor(private readonly waitMs = WRITE_WAIT_MS) {}
-
-  heldHere(): boolean {
-    return this.holder.getStore() === true;
-  }
-
-  get waiting(): number {
-    return this.waiters.length;
-  }
-
-  async run<T>(fn: () => Promise<T>): Promise<T> {
-    const release = await this.acquire();
-    try {
-      return await this.holder.run(true, fn);
-    } finally {
-      release();
-    }
-  }
-
-  /** Resolves with the release function once it is this caller's turn; rejects with 503 after waitMs. */
-  acquire(): Promise<() => void> {
-    if (!this.held) {
-      this.held = true;
-      return Promise.resolve(this.releaser());
-    }
-    return new Promise((resolve, reject) => {
-      const grant = () => {
-        clearTimeout(timer);
-        resolve(this.releaser());
-      };
-      const timer = setTimeout(() => {
-        const at = this.waiters.indexOf(grant);
-        if (at >= 0) this.waiters.splice(at, 1);
-        reject(busy(Math.max(1, Math.ceil((this.waiters.length * this.meanHoldMs) / 1000))));
-      }, this.waitMs);
-      this.waiters.push(grant);
-    });
-  }
-
-  private releaser(): () => void {
-    const started = Date.now();
-    let released = false;
-    return () => {
-      if (released) return;
-      released = true;
-      this.meanHoldMs = this.meanHoldMs * 0.9 + (Date.now() - started) * 0.1;
-      const next = this.waiters.shift();
-      if (next) next();
-      else this.held = false;
-    };
-  }
 }
 
 type TransactionFn = (options?: object, autoCallback?: (t: Transaction) => Promise<unknown>) => Promise<unknown>;

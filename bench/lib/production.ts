@@ -12,7 +12,8 @@ import { freePort } from '../../tests/helpers/pg-cluster';
  * throwaway SQLite file with the demo seed, with the mail, DOI and Crossref fakes — the setup of
  * tests/e2e/global-setup.ts, outside vitest, for the probes and the single-process benchmarks.
  * Builds first when .next has no build (PROBE_REBUILD=1 forces one); PROBE_KEEP=1 keeps the
- * work folder (database, mail, server log).
+ * work folder (database, mail, server log); PROBE_CPU_PROFILE=folder has the server write a CPU
+ * profile (node --cpu-prof) there when it stops.
  */
 export interface Production {
   url: string;
@@ -65,30 +66,38 @@ export async function startProduction(options: ProductionOptions = {}): Promise<
   const url = `http://127.0.0.1:${port}`;
   const logFile = path.join(work, 'server.log');
   const log = createWriteStream(logFile);
-  const server: ChildProcess = spawn(process.execPath, ['--import', 'tsx', path.join(ROOT, 'scripts/start.ts')], {
-    cwd: ROOT,
-    env: {
-      ...process.env,
-      NODE_ENV: 'production',
-      NEXT_TELEMETRY_DISABLED: '1',
-      PORT: String(port),
-      HOST: '127.0.0.1',
-      DATABASE_URL: databaseFile,
-      SESSION_SECRET: 'probe-secret-that-is-long-enough-for-iron-session-000',
-      COOKIE_SECURE: 'false',
-      APP_URL: url,
-      SMTP_HOST: '127.0.0.1',
-      SMTP_PORT: String(smtp.port),
-      MAIL_DROP_DIR: path.join(work, 'mail'),
-      STORAGE_DIR: path.join(work, 'uploads'),
-      DOI_BASE_URL: doi.url,
-      CROSSREF_BASE_URL: crossref.url,
-      // Each actor sends its own x-forwarded-for, so the sign-in throttle counts them apart.
-      TRUSTED_PROXIES: '127.0.0.1,::1',
-      ...options.env,
+  // PROBE_CPU_PROFILE=folder: the server writes a CPU profile there when it stops.
+  const profile = process.env.PROBE_CPU_PROFILE
+    ? ['--cpu-prof', `--cpu-prof-dir=${process.env.PROBE_CPU_PROFILE}`]
+    : [];
+  const server: ChildProcess = spawn(
+    process.execPath,
+    [...profile, '--import', 'tsx', path.join(ROOT, 'scripts/start.ts')],
+    {
+      cwd: ROOT,
+      env: {
+        ...process.env,
+        NODE_ENV: 'production',
+        NEXT_TELEMETRY_DISABLED: '1',
+        PORT: String(port),
+        HOST: '127.0.0.1',
+        DATABASE_URL: databaseFile,
+        SESSION_SECRET: 'probe-secret-that-is-long-enough-for-iron-session-000',
+        COOKIE_SECURE: 'false',
+        APP_URL: url,
+        SMTP_HOST: '127.0.0.1',
+        SMTP_PORT: String(smtp.port),
+        MAIL_DROP_DIR: path.join(work, 'mail'),
+        STORAGE_DIR: path.join(work, 'uploads'),
+        DOI_BASE_URL: doi.url,
+        CROSSREF_BASE_URL: crossref.url,
+        // Each actor sends its own x-forwarded-for, so the sign-in throttle counts them apart.
+        TRUSTED_PROXIES: '127.0.0.1,::1',
+        ...options.env,
+      },
+      stdio: ['ignore', 'pipe', 'pipe'],
     },
-    stdio: ['ignore', 'pipe', 'pipe'],
-  });
+  );
   server.stdout?.pipe(log);
   server.stderr?.pipe(log);
 

@@ -1,15 +1,16 @@
 'use client';
 
 import { useActionState } from 'react';
-import { unsubscribeAction, type UnsubscribeState } from '@/app/unsubscribe/[token]/actions';
+import { unsubscribeAction } from '@/app/unsubscribe/[token]/actions';
+import type { FormState } from '@/lib/auth/action';
 import { SubmitButton } from '@/components/ui/SubmitButton';
 
 export function UnsubscribeForm({ token, teamName }: { token: string; teamName: string }) {
-  const [state, action] = useActionState<UnsubscribeState, FormData>(unsubscribeAction, {});
-  if (state.done) {
+  const [state, action] = useActionState<FormState, FormData>(unsubscribeAction, {});
+  if (state.ok) {
     return (
       <p role="status" className="mt-4">
-        Done: you will get no more e-mails about {state.teamName}’s verdicts. You can follow the team again from its
+        Done: you will get no more e-mails about {teamName}’s verdicts. You can follow the team again from its
         verdicts page.
       </p>
     );

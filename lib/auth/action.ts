@@ -2,6 +2,7 @@ import { headers } from 'next/headers';
 import type { z } from 'zod';
 import { AppError } from '@/lib/api/errors';
 import { busyError } from '@/lib/api/respond';
+import { inWriteTurn } from '@/lib/api/write-turns';
 import { loadActor } from './actor';
 import { forwardedClient } from './client-address';
 import { authorize, requireActor } from './authorize';
@@ -27,7 +28,7 @@ export interface ActionContext {
 
 /**
  * The one wrapper of every server action: validates the form with zod (field errors come back
- * for inline display), loads the session and actor, hands over the policy, and turns an AppError
+ * for inline display), waits for a write turn (lib/api/write-turns.ts), loads the session and actor, hands over the policy, and turns an AppError
  * into a message. Anything else (including redirect()) propagates to Next.
  *
  * @example
@@ -45,19 +46,21 @@ export function formAction<T>(schema: z.ZodType<T>, fn: (data: T, ctx: ActionCon
       }
       return { errors, values: withoutSecrets(values), message: 'Please correct the highlighted fields.' };
     }
-    const session = await currentSession();
-    const actor = await loadActor(session);
-    const address = forwardedClient(await headers());
     try {
-      return (
-        (await fn(parsed.data, {
-          session,
-          actor,
-          address,
-          authorize: (action, resource, what) => authorize(actor, action, resource, what),
-          signedIn: () => requireActor(actor),
-        })) ?? { ok: true }
-      );
+      return await inWriteTurn(async () => {
+        const session = await currentSession();
+        const actor = await loadActor(session);
+        const address = forwardedClient(await headers());
+        return (
+          (await fn(parsed.data, {
+            session,
+            actor,
+            address,
+            authorize: (action, resource, what) => authorize(actor, action, resource, what),
+            signedIn: () => requireActor(actor),
+          })) ?? { ok: true }
+        );
+      });
     } catch (thrown) {
       const error = busyError(thrown) ?? thrown;
       if (error instanceof AppError) {

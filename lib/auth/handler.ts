@@ -2,6 +2,7 @@ import { getIronSession, type IronSession } from 'iron-session';
 import type { z } from 'zod';
 import { badRequest } from '@/lib/api/errors';
 import { errorResponse, fromZod } from '@/lib/api/respond';
+import { inWriteTurn } from '@/lib/api/write-turns';
 import { env } from '@/lib/env';
 import { loadActor } from './actor';
 import { forwardedClient } from './client-address';
@@ -32,14 +33,20 @@ interface RouteOptions<P, B, Q> {
   auth?: 'required' | 'optional';
   /** The route reads a multipart upload itself (documented in docs/api/); otherwise bodies are JSON. */
   multipart?: boolean;
+  /**
+   * A write that works for seconds (the evidence watch waited for): it takes no write turn
+   * (lib/api/write-turns.ts), so it never keeps the short saves waiting. Uploads never take one.
+   */
+  slow?: boolean;
 }
 
 type NextRouteContext = { params: Promise<Record<string, string | string[]>> };
 
 /**
- * The one wrapper of every route handler: reads the session, loads the actor, validates params,
- * query and JSON body with zod, hands the handler the policy, and turns whatever it throws into
- * the error JSON of docs/api/README.md. A handler returns a Response or a value to send as JSON.
+ * The one wrapper of every route handler: refuses cross-site writes, gives a write its turn
+ * (lib/api/write-turns.ts), reads the session, loads the actor, validates params, query and JSON
+ * body with zod, hands the handler the policy, and turns whatever it throws into the error JSON
+ * of docs/api/README.md. A handler returns a Response or a value to send as JSON.
  *
  * @example
  * export const GET = route({ params: teamParams }, async ({ params, authorize }) => {
@@ -59,25 +66,29 @@ export function route<P = Record<string, never>, B = undefined, Q = Record<strin
       if (!isSafeMethod(req.method) && (options.body || options.multipart || hasBody(req.headers))) {
         assertContentType(req.headers, options.multipart ? 'multipart' : 'json');
       }
-      const session = await getIronSession<SessionData>(req, cookieCarrier, sessionOptions());
-      const actor = await loadActor(session);
-      if (options.auth !== 'optional' && !actor) requireActor(actor);
+      const work = async () => {
+        const session = await getIronSession<SessionData>(req, cookieCarrier, sessionOptions());
+        const actor = await loadActor(session);
+        if (options.auth !== 'optional' && !actor) requireActor(actor);
 
-      const params = parseWith(options.params, (await context?.params) ?? {});
-      const query = parseWith(options.query, Object.fromEntries(new URL(req.url).searchParams));
-      const body = options.body ? parseWith(options.body, await readJson(req)) : (undefined as B);
+        const params = parseWith(options.params, (await context?.params) ?? {});
+        const query = parseWith(options.query, Object.fromEntries(new URL(req.url).searchParams));
+        const body = options.body ? parseWith(options.body, await readJson(req)) : (undefined as B);
 
-      const result = await handler({
-        req,
-        params,
-        body,
-        query,
-        session,
-        actor,
-        address: clientAddress(req),
-        authorize: (action, resource, what) => authorize(actor, action, resource, what),
-        signedIn: () => requireActor(actor),
-      });
+        return handler({
+          req,
+          params,
+          body,
+          query,
+          session,
+          actor,
+          address: clientAddress(req),
+          authorize: (action, resource, what) => authorize(actor, action, resource, what),
+          signedIn: () => requireActor(actor),
+        });
+      };
+      const takesTurn = !isSafeMethod(req.method) && !options.multipart && !options.slow;
+      const result = await (takesTurn ? inWriteTurn(work) : work());
       return withCookies(result instanceof Response ? result : Response.json(result ?? {}), cookieCarrier);
     } catch (error) {
       return withCookies(errorResponse(error), cookieCarrier);

@@ -40,6 +40,9 @@ export const verdictQuery = z.object({
   limit: z.coerce.number().int().min(1).max(100).optional(),
 });
 
+/** The unsubscribe button's form: the signed token of the mail's link (checked in lib/follows/follows.ts). */
+export const unsubscribeForm = z.object({ token: z.string().trim().min(1, 'The link is incomplete.').max(100) });
+
 export const SEARCH_KINDS = ['review', 'mechanism', 'study'] as const;
 
 export const searchQuery = z.object({

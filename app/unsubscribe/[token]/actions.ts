@@ -1,17 +1,13 @@
 'use server';
 
+import { formAction } from '@/lib/auth/action';
 import { unsubscribe } from '@/lib/follows/follows';
-
-export interface UnsubscribeState {
-  done?: boolean;
-  teamName?: string;
-  message?: string;
-}
+import { unsubscribeForm } from '@/lib/validation/publishing';
 
 // A button, not the GET of the link, stops the mails: mail scanners open links and must not unsubscribe anyone.
-export async function unsubscribeAction(_prev: UnsubscribeState, formData: FormData): Promise<UnsubscribeState> {
-  const token = String(formData.get('token') ?? '');
+// Signed out is the rule here: the signed token is the permission (lib/follows/follows.ts).
+export const unsubscribeAction = formAction(unsubscribeForm, async ({ token }) => {
   const result = await unsubscribe(token);
   if (!result) return { message: 'This link is no longer valid: you may already have stopped these mails.' };
-  return { done: true, teamName: result.teamName };
-}
+  return { ok: true };
+});

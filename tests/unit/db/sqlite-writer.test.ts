@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { AppError } from '@/lib/api/errors';
-import { isWriteStatement, WriteQueue } from '@/lib/sqlite-writer';
+import { isWriteStatement } from '@/lib/sqlite-writer';
+import { WriteQueue } from '@/lib/write-queue';
 
 describe('the write queue', () => {
   it('runs writers one at a time, in arrival order', async () => {
@@ -34,6 +35,30 @@ describe('the write queue', () => {
     const nested = queue.run(async () => (queue.heldHere() ? 'inside' : 'outside'));
     await expect(nested).resolves.toBe('inside');
     expect(queue.heldHere()).toBe(false);
+  });
+
+  it('with several slots, lets that many in at once and starts the rest in arrival order', async () => {
+    const queue = new WriteQueue(1000, 3);
+    let inside = 0;
+    let most = 0;
+    const started: number[] = [];
+    await Promise.all(
+      Array.from({ length: 7 }, (_, i) =>
+        queue.run(async () => {
+          started.push(i);
+          inside += 1;
+          most = Math.max(most, inside);
+          await new Promise((r) => setTimeout(r, 5));
+          inside -= 1;
+        }),
+      ),
+    );
+    expect(most).toBe(3);
+    expect(started).toEqual([0, 1, 2, 3, 4, 5, 6]);
+    // Every slot was given back: three more get in at once again.
+    const again = await Promise.all([1, 2, 3].map(() => queue.acquire()));
+    expect(queue.waiting).toBe(0);
+    again.forEach((release) => release());
   });
 
   it('tells reads from writes', () => {

@@ -11,7 +11,7 @@ export const GET = route({ params: watchParams }, async ({ params, authorize, ac
 
 // POST /api/teams/:teamId/evidence-watch — run the watch now (owners and coaches); 202 with the run, or 200 when it is over with ?wait=1.
 export const POST = route(
-  { params: watchParams, query: watchRunQuery },
+  { params: watchParams, query: watchRunQuery, slow: true },
   async ({ params, query, authorize, signedIn }) => {
     authorize('evidence.watch.run', { teamId: params.teamId }, 'That team');
     const wait = query.wait === '1';
