@@ -10,8 +10,8 @@ export function UnsubscribeForm({ token, teamName }: { token: string; teamName: 
   if (state.ok) {
     return (
       <p role="status" className="mt-4">
-        Done: you will get no more e-mails about {teamName}’s verdicts. You can follow the team again from its
-        verdicts page.
+        Done: you will get no more e-mails about {teamName}’s verdicts. You can follow the team again from its verdicts
+        page.
       </p>
     );
   }
