@@ -25,10 +25,16 @@ export async function teamsOf(userId: number): Promise<TeamSummary[]> {
     include: [{ model: Team, as: 'team' }],
     order: [['createdAt', 'ASC']],
   });
-  const counts = await Promise.all(memberships.map((m) => Membership.count({ where: { teamId: m.teamId } })));
-  return memberships.map((m, i) => {
+  if (!memberships.length) return [];
+  // One grouped count for every team (not one query per team: /api/me runs this on each call).
+  const grouped = (await Membership.count({
+    where: { teamId: memberships.map((m) => m.teamId) },
+    group: ['teamId'],
+  })) as unknown as Array<{ teamId: number; count: number | string }>;
+  const counts = new Map(grouped.map((row) => [Number(row.teamId), Number(row.count)]));
+  return memberships.map((m) => {
     const team = (m as Membership & { team: Team }).team;
-    return { id: team.id, name: team.name, slug: team.slug, role: m.role, memberCount: counts[i] };
+    return { id: team.id, name: team.name, slug: team.slug, role: m.role, memberCount: counts.get(m.teamId) ?? 0 };
   });
 }
 
