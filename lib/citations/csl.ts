@@ -1,4 +1,5 @@
 import { normalizeDoi } from './doi';
+import { foldSpaces } from './rich-text';
 
 /**
  * Reading and writing CSL-JSON items (the Citation Style Language's data format, as citation-js
@@ -76,7 +77,7 @@ export function cleanCsl(item: CslItem): CslItem {
   }
   if (typeof clean.type !== 'string' || !clean.type) clean.type = 'article-journal';
   const title = cslTitle(clean);
-  if (title) clean.title = title.replace(/\s+/g, ' ');
+  if (title) clean.title = foldSpaces(title);
   if (clean.DOI !== undefined) {
     const doi = typeof clean.DOI === 'string' ? normalizeDoi(clean.DOI) : null;
     if (doi) clean.DOI = doi;

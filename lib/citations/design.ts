@@ -1,5 +1,6 @@
 import type { StudyDesign } from '@/lib/scoring/types';
 import { cslTitle, type CslItem } from './csl';
+import { foldSpaces } from './rich-text';
 
 /**
  * A study design read off a reference's title and keywords, where they say it in so many words
@@ -39,10 +40,23 @@ const RULES: readonly [StudyDesign, RegExp][] = [
   ['expert-opinion', /\bconsensus statement\b|\bexpert (?:opinion|consensus)\b|\bposition (?:stand|statement)\b/],
 ];
 
+/**
+ * All the rules as one pattern, to rule out at once the many titles that name no design: one
+ * scan of the text instead of one per rule. Only the order of the rules says which design a
+ * title gets, so a text this matches still goes through them one by one.
+ */
+const ANY_RULE = new RegExp(
+  RULES.map(([design, pattern]) => {
+    // Flags would be lost in the union: a rule that needs one must be handled apart.
+    if (pattern.flags) throw new Error(`The ${design} rule has flags (${pattern.flags}).`);
+    return `(?:${pattern.source})`;
+  }).join('|'),
+);
+
 /** Title and keywords as one text (CSL `keyword` is one string, comma-separated). */
 function describedBy(csl: CslItem): string {
   const keywords = typeof csl.keyword === 'string' ? csl.keyword : '';
-  return `${cslTitle(csl) ?? ''} ${keywords}`.replace(/\s+/g, ' ');
+  return foldSpaces(`${cslTitle(csl) ?? ''} ${keywords}`);
 }
 
 /**
@@ -53,5 +67,6 @@ function describedBy(csl: CslItem): string {
  */
 export function suggestDesign(csl: CslItem): StudyDesign | null {
   const text = describedBy(csl).toLowerCase();
+  if (!ANY_RULE.test(text)) return null;
   return RULES.find(([, pattern]) => pattern.test(text))?.[0] ?? null;
 }

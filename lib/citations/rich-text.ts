@@ -68,8 +68,18 @@ const TEXT_FIELDS = [
 const NAME_FIELDS = ['author', 'editor', 'translator', 'container-author', 'collection-editor', 'director'] as const;
 const NAME_PARTS = ['family', 'given', 'literal', 'suffix', 'dropping-particle', 'non-dropping-particle'] as const;
 
-/** Whitespace runs (including the no-break space TeX's `~` becomes) folded to one space, trimmed. */
-const tidy = (value: string) => value.replace(/\s+/g, ' ').trim();
+/**
+ * The whitespace that folding changes: a run of two or more, or one character that is not a plain
+ * space. A lone space is already folded, and matching each one (as `/\s+/g` does, once a word)
+ * would make a replace of an abstract cost a match and a piece of new string per word.
+ */
+const UNFOLDED = /\s{2,}|[^\S ]/g;
+
+/** Whitespace runs (including the no-break space TeX's `~` becomes) folded to one space each. */
+export const foldSpaces = (value: string) => value.replace(UNFOLDED, ' ');
+
+/** Folded and trimmed. */
+const tidy = (value: string) => foldSpaces(value).trim();
 
 /**
  * Below U+0300 no character has a combining mark or a decomposition that NFC would change (the
@@ -104,7 +114,7 @@ export function plainCsl(item: CslItem): CslItem {
     const plain = plainText(value);
     if (field === 'title' && plain.italics.length) {
       // Ranges are measured on the text as stored, so fold the whitespace first and shift by the trim.
-      const folded = plainText(value.replace(/\s+/g, ' '));
+      const folded = plainText(foldSpaces(value));
       const text = folded.text.trim();
       const lead = folded.text.length - folded.text.trimStart().length;
       const clamp = (n: number) => Math.min(text.length, Math.max(0, n - lead));

@@ -7,6 +7,8 @@ import * as reviews from '@/app/api/reviews/route';
 import * as citation from '@/app/api/studies/[id]/citation/route';
 import * as one from '@/app/api/studies/[id]/route';
 import * as studies from '@/app/api/studies/route';
+import { importSource } from '@/lib/library/import';
+import { newStudyRow } from '@/lib/library/studies';
 import { Appraisal, Study } from '@/models';
 import { Client, useTestApp } from '../../helpers/app';
 import { makeTeam, newReview, snapshot, useDoiFakeAndStorage, type TeamFixture } from '../reviews/helpers';
@@ -129,6 +131,34 @@ describe('POST /api/studies — pasted BibTeX, RIS, CSL-JSON or DOIs', () => {
     const again = await add(t.coach, { teamId: t.teamId, source: '10.5555/hjts.2025.0012' });
     expect(again.body.results[0]).toMatchObject({ status: 'duplicate', studyId: res.body.results[0].studyId });
     expect(fake.doi().requests).toBe(asked);
+  });
+
+  it('fails a chunk alone, with a sentence, when another writer added one of its DOIs after the library was read', async () => {
+    const doi = '10.5555/race.0001';
+    const csl = {
+      type: 'article-journal',
+      title: 'Grip work read twice',
+      DOI: doi,
+      issued: { 'date-parts': [[2024]] },
+    };
+    const result = await importSource(t.teamId, t.userIds.coach, doi, {
+      format: 'doi',
+      // The lookup runs after the library's DOIs were read: a write now (another process, say)
+      // is seen only by the unique index when the chunk is inserted.
+      lookup: async () => {
+        await Study.create(newStudyRow(t.teamId, t.userIds.coach, csl, {}) as never);
+        return { ok: true, csl };
+      },
+    });
+    expect(result.results).toEqual([
+      {
+        index: 0,
+        title: 'Grip work read twice',
+        status: 'failed',
+        reason: 'Another import added some of these studies at the same moment; import again to see which are new.',
+      },
+    ]);
+    expect(await Study.count({ where: { teamId: t.teamId, doi } })).toBe(1);
   });
 
   it('answers an unreadable paste with one failed entry and adds nothing', async () => {

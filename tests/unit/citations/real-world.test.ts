@@ -5,7 +5,7 @@ import { authorYear } from '@/lib/citations/author-year';
 import { cslJournal, cslYear, type CslItem } from '@/lib/citations/csl';
 import { suggestDesign } from '@/lib/citations/design';
 import { parseSource, type ParsedEntry } from '@/lib/citations/parse';
-import { plainCsl, plainText } from '@/lib/citations/rich-text';
+import { foldSpaces, plainCsl, plainText } from '@/lib/citations/rich-text';
 
 /**
  * Real-world-shaped reference files (fixtures/citations/real-world.bib and .ris, invented entries
@@ -192,6 +192,24 @@ describe('suggested design from the title and keywords', () => {
 });
 
 describe('plain text out of citation-js rich text', () => {
+  // foldSpaces leaves a lone space alone (it is already folded) and replaces every other run.
+  it('folds every whitespace run to one space, as one replace of /\\s+/ would', () => {
+    const samples = [
+      'plain words, one space each',
+      '  lead and trail  ',
+      'tab\there, new\nline, both \t\n here',
+      'no\u00a0break, thin\u2009space, ideographic\u3000one',
+      ' x\r\n\r\ny \u00a0 z\f\v',
+      '\n',
+      ' ',
+      '',
+    ];
+    for (const text of samples) expect(foldSpaces(text)).toBe(text.replace(/\s+/g, ' '));
+    expect(plainCsl({ title: 'T', abstract: '  Grip\n  strength\u00a0rose \t by 8 %.\n' }).abstract).toBe(
+      'Grip strength rose by 8 %.',
+    );
+  });
+
   it('drops only the tags citation-js writes, and keeps a literal "<" in the text', () => {
     expect(plainText('<span class="nocase">DNA</span> and <b>bold</b> p <0.05')).toEqual({
       text: 'DNA and bold p <0.05',
