@@ -45,7 +45,7 @@ async function main() {
       ['GET /api/reviews/:id (workbench)', () => call('GET', `/api/reviews/${review.id}`)],
       [
         'PATCH /api/reviews/:id, stale (409)',
-        () => call('PATCH', `/api/reviews/${review.id}`, { version: 1, title: 'x' }),
+        () => call('PATCH', `/api/reviews/${review.id}`, { version: 1, title: 'A stale title' }),
       ],
       [
         'PATCH /api/reviews/:id, signed out (401)',
