@@ -11,7 +11,7 @@
  */
 import http from 'node:http';
 import { newReview as reviewInput } from '../tests/helpers/review-input';
-import { startProduction } from './lib/production';
+import { signInDemo, startProduction } from './lib/production';
 
 const percentile = (values: number[], p: number) => {
   const sorted = [...values].sort((a, b) => a - b);
@@ -22,18 +22,7 @@ async function main() {
   const app = await startProduction({ name: 'bench-concurrency' });
   const base = app.url;
   try {
-    const signIn = await fetch(`${base}/api/auth/sign-in`, {
-      method: 'POST',
-      headers: { 'content-type': 'application/json' },
-      body: JSON.stringify({ email: 'owner@granite-hollow.test', password: 'loadbearing-demo' }),
-    });
-    const cookie = signIn.headers.getSetCookie()[0].split(';')[0];
-    const call = (method: string, p: string, body?: unknown) =>
-      fetch(`${base}${p}`, {
-        method,
-        headers: { cookie, ...(body ? { 'content-type': 'application/json' } : {}) },
-        body: body ? JSON.stringify(body) : undefined,
-      });
+    const { cookie, call } = await signInDemo(base);
     const me = await (await call('GET', '/api/me')).json();
     const teamId = me.teams[0].id;
     const newReview = async (title: string) =>

@@ -9,7 +9,7 @@
  */
 import { readFileSync } from 'node:fs';
 import { newReview as reviewInput } from '../tests/helpers/review-input';
-import { startProduction } from './lib/production';
+import { signInDemo, startProduction } from './lib/production';
 
 const REQUESTS = Number(process.argv[2] ?? 200);
 const TICK_MS = 10; // USER_HZ is 100 on Linux
@@ -23,18 +23,11 @@ async function main() {
   const app = await startProduction({ name: 'bench-request-cost' });
   const base = app.url;
   try {
-    const signIn = await fetch(`${base}/api/auth/sign-in`, {
-      method: 'POST',
-      headers: { 'content-type': 'application/json' },
-      body: JSON.stringify({ email: 'owner@granite-hollow.test', password: 'loadbearing-demo' }),
-    });
-    const cookie = signIn.headers.getSetCookie()[0].split(';')[0];
-    const call = (method: string, p: string, body?: unknown, signedIn = true) =>
-      fetch(`${base}${p}`, {
-        method,
-        headers: { ...(signedIn ? { cookie } : {}), ...(body ? { 'content-type': 'application/json' } : {}) },
-        body: body ? JSON.stringify(body) : undefined,
-      });
+    const { call: signedIn } = await signInDemo(base);
+    const call = (method: string, p: string, body?: unknown, asSignedIn = true) =>
+      asSignedIn
+        ? signedIn(method, p, body)
+        : fetch(`${base}${p}`, { method, headers: { 'content-type': 'application/json' }, body: JSON.stringify(body) });
     const me = await (await call('GET', '/api/me')).json();
     const review = (await (await call('POST', '/api/reviews', reviewInput(me.teams[0].id, { title: 'Cost' }))).json())
       .review;

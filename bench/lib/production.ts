@@ -129,3 +129,27 @@ export async function startProduction(options: ProductionOptions = {}): Promise<
   }
   return { url, databaseFile, firstReviewId, pid: server.pid!, smtp, logFile, stop };
 }
+
+/** A request as a signed-in person: method, path and an optional JSON body. */
+export type SignedInCall = (method: string, path: string, body?: unknown) => Promise<Response>;
+
+/** Signs in as one of the demo seed's people (all share the demo password): their cookie, and calls as them. */
+export async function signInDemo(
+  base: string,
+  email = 'owner@granite-hollow.test',
+): Promise<{ cookie: string; call: SignedInCall }> {
+  const signIn = await fetch(`${base}/api/auth/sign-in`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json' },
+    body: JSON.stringify({ email, password: 'loadbearing-demo' }),
+  });
+  if (signIn.status !== 200) throw new Error(`sign-in as ${email}: ${signIn.status}`);
+  const cookie = signIn.headers.getSetCookie()[0].split(';')[0];
+  const call: SignedInCall = (method, path, body) =>
+    fetch(`${base}${path}`, {
+      method,
+      headers: { cookie, ...(body === undefined ? {} : { 'content-type': 'application/json' }) },
+      body: body === undefined ? undefined : JSON.stringify(body),
+    });
+  return { cookie, call };
+}

@@ -121,6 +121,13 @@ describe('publishing a verdict to a following athlete', () => {
     expect(await visitor.getByText(/What changed in this version: Shared with everyone/).isVisible()).toBe(true);
     expect(await visitor.getByRole('link', { name: 'Sign in' }).isVisible()).toBe(true);
 
+    // The mail's other link: opening it only asks (mail scanners open links); the button stops the mails.
+    await athlete.goto(linkFrom(mail, '/unsubscribe/'));
+    await athlete.getByRole('button', { name: 'Stop these e-mails' }).click();
+    await expect
+      .poll(() => athlete.getByRole('status').filter({ hasText: 'you will get no more e-mails' }).isVisible())
+      .toBe(true);
+
     await visitorContext.close();
     await athleteContext.close();
     await ownerContext.close();

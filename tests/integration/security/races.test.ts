@@ -14,6 +14,20 @@ beforeAll(async () => {
   t = await makeTeam('race');
 });
 
+/** An open invitation to the other team, as its owner would send it; answers the link's token. */
+async function inviteToOtherTeam(email: string): Promise<string> {
+  const { token, hash } = newToken();
+  await Invitation.create({
+    teamId: t.otherTeamId,
+    email,
+    role: 'coach',
+    tokenHash: hash,
+    invitedById: t.userIds.outsider,
+    expiresAt: new Date(Date.now() + 3_600_000),
+  });
+  return token;
+}
+
 describe('racing writes', () => {
   it('two owners demoting each other at the same moment leave the team with an owner', async () => {
     await Membership.update({ role: 'owner' }, { where: { teamId: t.teamId, userId: t.userIds.coach } });
@@ -34,15 +48,7 @@ describe('racing writes', () => {
   });
 
   it('one invitation accepted by two people at once: one joins, the other gets 409', async () => {
-    const { token, hash } = newToken();
-    await Invitation.create({
-      teamId: t.otherTeamId,
-      email: 'shared-link@example.test',
-      role: 'coach',
-      tokenHash: hash,
-      invitedById: t.userIds.outsider,
-      expiresAt: new Date(Date.now() + 3_600_000),
-    });
+    const token = await inviteToOtherTeam('shared-link@example.test');
     const [a, b] = await Promise.all([
       t.reviewer.call(accept.POST, { params: { token }, json: {} }),
       t.athlete.call(accept.POST, { params: { token }, json: {} }),
@@ -54,15 +60,7 @@ describe('racing writes', () => {
   // The loser of the race above may read the invitation after the winner has committed: it is
   // told the link was used (409), as if they had arrived together, not that it never existed.
   it('an invitation accepted a moment after someone else gets 409, not 404', async () => {
-    const { token, hash } = newToken();
-    await Invitation.create({
-      teamId: t.otherTeamId,
-      email: 'late-link@example.test',
-      role: 'coach',
-      tokenHash: hash,
-      invitedById: t.userIds.outsider,
-      expiresAt: new Date(Date.now() + 3_600_000),
-    });
+    const token = await inviteToOtherTeam('late-link@example.test');
     const first = await t.coach.call(accept.POST, { params: { token }, json: {} });
     const second = await t.owner.call(accept.POST, { params: { token }, json: {} });
     expect([first.status, second.status]).toEqual([200, 409]);
