@@ -1,4 +1,4 @@
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
 import { WRITES_AT_ONCE } from '@/lib/api/write-turns';
 import { route } from '@/lib/auth/handler';
 import { useTestApp, Client } from '../../helpers/app';
@@ -21,7 +21,9 @@ describe('write turns', () => {
     const read = route({ auth: 'optional' }, async () => ({ running }));
     const client = new Client();
     const writes = Array.from({ length: WRITES_AT_ONCE + 3 }, () => client.call(write, { json: {} }));
-    // Let every request get as far as it can.
+    // The first ones reach their handler (however busy the machine), then every request gets
+    // many more turns of the event loop to go as far as it can: the rest must still be waiting.
+    await vi.waitFor(() => expect(running).toBe(WRITES_AT_ONCE), { timeout: 10_000 });
     for (let i = 0; i < 50; i++) await new Promise((r) => setImmediate(r));
     expect(running).toBe(WRITES_AT_ONCE);
 
