@@ -28,8 +28,9 @@ export interface ActionContext {
 
 /**
  * The one wrapper of every server action: validates the form with zod (field errors come back
- * for inline display), waits for a write turn (lib/api/write-turns.ts), loads the session and actor, hands over the policy, and turns an AppError
- * into a message. Anything else (including redirect()) propagates to Next.
+ * for inline display), waits for a write turn (lib/api/write-turns.ts), loads the session and
+ * actor, hands over the policy, and turns an AppError into a message. Anything else (including
+ * redirect()) propagates to Next.
  *
  * @example
  * export const inviteAction = formAction(inviteSchema, async (data, { authorize }) => { ... });
