@@ -160,6 +160,10 @@ describe('a coach takes a claim apart in the workbench', () => {
     // once the page is hydrated, the editor created and the verdict shown: the same places.
     const where = async (page: Page) => {
       const box = async (selector: string) => {
+        // React reveals a streamed part a moment after it arrives (react-dom's inline `$RC`
+        // script batches reveals on requestAnimationFrame or a ~300 ms timer), so a part can
+        // still be hidden when the load event fires: wait until it shows (it failed once so).
+        await page.locator(selector).first().waitFor();
         const b = await page.locator(selector).first().boundingBox();
         return b && { y: Math.round(b.y), height: Math.round(b.height) };
       };
