@@ -38,24 +38,39 @@ export class WriteQueue {
     }
   }
 
-  /** Resolves with the release function once it is this caller's turn; rejects with 503 after waitMs. */
-  acquire(): Promise<() => void> {
+  /**
+   * Resolves with the release function once it is this caller's turn; rejects with 503 after
+   * waitMs. A caller that stops waiting (`signal` aborted: its client went away) leaves the line
+   * and gets nothing.
+   */
+  acquire(signal?: AbortSignal): Promise<() => void> {
     if (this.active < this.slots) {
       this.active += 1;
       return Promise.resolve(this.releaser());
     }
     return new Promise((resolve, reject) => {
+      const leave = () => {
+        const at = this.waiters.indexOf(grant);
+        if (at >= 0) this.waiters.splice(at, 1);
+      };
+      const gaveUp = () => {
+        clearTimeout(timer);
+        leave();
+        reject(signal?.reason);
+      };
       const grant = () => {
         clearTimeout(timer);
+        signal?.removeEventListener('abort', gaveUp);
         resolve(this.releaser());
       };
       const timer = setTimeout(() => {
-        const at = this.waiters.indexOf(grant);
-        if (at >= 0) this.waiters.splice(at, 1);
+        signal?.removeEventListener('abort', gaveUp);
+        leave();
         const waitMs = (this.waiters.length * this.meanHoldMs) / this.slots;
         reject(busy(Math.max(1, Math.ceil(waitMs / 1000))));
       }, this.waitMs);
       this.waiters.push(grant);
+      signal?.addEventListener('abort', gaveUp, { once: true });
     });
   }
 

@@ -2,7 +2,7 @@ import { getIronSession, type IronSession } from 'iron-session';
 import type { z } from 'zod';
 import { badRequest } from '@/lib/api/errors';
 import { errorResponse, fromZod } from '@/lib/api/respond';
-import { inWriteTurn } from '@/lib/api/write-turns';
+import { inWriteTurn, leaveTheDoor } from '@/lib/api/write-turns';
 import { env } from '@/lib/env';
 import { loadActor } from './actor';
 import { forwardedClient } from './client-address';
@@ -34,8 +34,9 @@ interface RouteOptions<P, B, Q> {
   /** The route reads a multipart upload itself (documented in docs/api/); otherwise bodies are JSON. */
   multipart?: boolean;
   /**
-   * A write that works for seconds (the evidence watch waited for): it takes no write turn
-   * (lib/api/write-turns.ts), so it never keeps the short saves waiting. Uploads never take one.
+   * A write that works for seconds (the evidence watch waited for): it gives up its place at the
+   * server's door and takes no write turn (lib/api/write-turns.ts), so it never keeps the short
+   * saves waiting. Uploads never take either.
    */
   slow?: boolean;
 }
@@ -60,6 +61,7 @@ export function route<P = Record<string, never>, B = undefined, Q = Record<strin
 ) {
   return async (req: Request, context?: NextRouteContext): Promise<Response> => {
     const cookieCarrier = new Response();
+    if (options.slow) leaveTheDoor();
     try {
       // Before the session is read: another site's request learns nothing and changes nothing.
       if (crossSiteReason(req.method, req.headers, req.url, env().APP_URL)) throw crossSiteRefusal();

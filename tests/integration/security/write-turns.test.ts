@@ -1,5 +1,5 @@
 import { describe, expect, it, vi } from 'vitest';
-import { WRITES_AT_ONCE } from '@/lib/api/write-turns';
+import { WRITES_AT_ONCE, withDoorPlace } from '@/lib/api/write-turns';
 import { route } from '@/lib/auth/handler';
 import { useTestApp, Client } from '../../helpers/app';
 
@@ -34,5 +34,17 @@ describe('write turns', () => {
     const statuses = (await Promise.all(writes)).map((w) => w.status);
     expect(statuses).toEqual(Array(WRITES_AT_ONCE + 3).fill(200));
     expect(running).toBe(WRITES_AT_ONCE + 3);
+  });
+
+  it("gives up a slow write's place at npm start's door, and only a slow one's", async () => {
+    const client = new Client();
+    const slow = route({ auth: 'optional', slow: true }, async () => ({ ok: true }));
+    const quick = route({ auth: 'optional' }, async () => ({ ok: true }));
+    const slowPlace = vi.fn();
+    const quickPlace = vi.fn();
+    await withDoorPlace(slowPlace, () => client.call(slow, { json: {} }));
+    await withDoorPlace(quickPlace, () => client.call(quick, { json: {} }));
+    expect(slowPlace).toHaveBeenCalledOnce();
+    expect(quickPlace).not.toHaveBeenCalled();
   });
 });
