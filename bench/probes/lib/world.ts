@@ -71,11 +71,19 @@ async function invitationToken(app: Production, owner: Caller, teamId: number, e
 async function buildOtherTeam(app: Production) {
   const password = 'quartzfield-probe-password';
   const owner = new Caller(app.url, 'other owner');
-  const { team } = await owner.ok<{ team: { id: number } }>('POST', '/api/auth/sign-up', {
+  const ownerEmail = `owner@${OTHER_MARK.toLowerCase()}.test`;
+  // Sign-up answers the same for every address and mails a link; the link creates the account.
+  await owner.ok('POST', '/api/auth/sign-up', {
     name: `${OTHER_MARK} Owner`,
-    email: `owner@${OTHER_MARK.toLowerCase()}.test`,
+    email: ownerEmail,
     password,
     teamName: `${OTHER_MARK} Strength Clinic`,
+  });
+  const mail = await app.smtp.waitFor((m) => m.to.some((to) => to.includes(ownerEmail)));
+  const confirmToken = mail.text.match(/\/sign-up\/confirm\?token=([A-Za-z0-9_%-]+)/)?.[1];
+  if (!confirmToken) throw new Error(`no sign-up link in the mail to ${ownerEmail}`);
+  const { team } = await owner.ok<{ team: { id: number } }>('POST', '/api/auth/sign-up/confirm', {
+    token: decodeURIComponent(confirmToken),
   });
   const teamId: number = team.id;
   const reviewerEmail = `reviewer@${OTHER_MARK.toLowerCase()}.test`;
