@@ -6,8 +6,10 @@ import { loadLocalEnv, migrateDatabase, refusePendingMigrations } from './boot';
 /**
  * `npm start`: the production server on a built app — Next's request handler in a small custom
  * server (https://nextjs.org/docs/app/guides/custom-server, scripts/app-server.ts) that decides
- * the client's address from the socket and TRUSTED_PROXIES before the app reads it. PORT (default 3000) and HOST (default: all interfaces); not HOSTNAME: containers
- * set that to their own name. Caching is the framework's and the proxy's (docs/deployment.md).
+ * the client's address from the socket and TRUSTED_PROXIES before the app reads it, and lets
+ * only a few write requests into Next at once (lib/api/write-turns.ts). PORT (default 3000) and
+ * HOST (default: all interfaces); not HOSTNAME: containers set that to their own name. Caching
+ * is the framework's and the proxy's (docs/deployment.md).
  *
  * Before it, the database: on SQLite (one process, the embedded default) it migrates under the
  * migration lock and never seeds; on PostgreSQL (several processes, docs/deployment.md) it does
